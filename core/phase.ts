@@ -1,0 +1,284 @@
+/**
+ * Where a substance's coexistence curves lie and which phase it is in at (T, p).
+ *
+ * Everything is decided from the published curves (boiling, sublimation, melting), never from
+ * comparing Gibbs energies of separate formulations: the curves are what the standards fit and
+ * check. SI in (K, Pa), SI out; errors are typed (see core/errors).
+ */
+import {
+  branchCoversPressure,
+  branchCoversTemperature,
+  branchLabel,
+  branchPressureRange,
+  pressureOnBranch,
+  temperatureOnBranch,
+} from "./curves";
+import { NoSuchStateError, OutOfRangeError, BadInputError, q } from "./errors";
+import { foldName } from "./names";
+import { citation } from "./sources/bibliography";
+import type { CurveBranch, SubstanceDefinition } from "./substances/types";
+import { checkPressure, checkTemperature, checkTemperatureCoverage } from "./validate";
+
+/** Phase words of the design. */
+export type PhaseName = "solid" | "liquid" | "vapor" | "gas" | "supercritical fluid";
+
+/** The phase at a state, with the finer label and, for solids, which solid. */
+export interface PhaseState {
+  /** The phase, or two phases joined by " + " exactly on a coexistence curve. */
+  readonly phase: PhaseName | "solid + liquid" | "liquid + vapor" | "solid + vapor";
+  /** The finer label: "ice Ih" … "ice VII", "compressed liquid", "superheated vapor", … */
+  readonly detail: string;
+  /** The curve branch that decided a solid, melting or sublimation state. */
+  readonly branch?: CurveBranch;
+}
+
+/** Triple point (T, p) of a substance. */
+export function triplePoint(substance: SubstanceDefinition): { temperatureK: number; pressurePa: number } {
+  const tt = substance.constants.tripleTemperature;
+  const pt = substance.constants.triplePressure;
+  if (!tt || !pt) throw new Error(`${substance.id} lacks a triple point`);
+  return { temperatureK: tt.value, pressurePa: pt.value };
+}
+
+/** Critical point (T, p) of a substance. */
+export function criticalPoint(substance: SubstanceDefinition): { temperatureK: number; pressurePa: number } {
+  const tc = substance.constants.criticalTemperature;
+  const pc = substance.constants.criticalPressure;
+  if (!tc || !pc) throw new Error(`${substance.id} lacks a critical point`);
+  return { temperatureK: tc.value, pressurePa: pc.value };
+}
+
+function requireSublimation(substance: SubstanceDefinition): CurveBranch {
+  const branch = substance.curves.sublimation;
+  if (!branch) {
+    throw new NoSuchStateError([`no sublimation curve is available for ${substance.name}`]);
+  }
+  return branch;
+}
+
+/**
+ * Pressure at which vapour coexists with the condensed phase stable at T: the boiling curve from
+ * the triple to the critical temperature, the sublimation curve below the triple point.
+ */
+export function saturationPressure(substance: SubstanceDefinition, temperatureK: number): number {
+  checkTemperature(temperatureK);
+  const triple = triplePoint(substance);
+  const critical = criticalPoint(substance);
+  if (temperatureK > critical.temperatureK) {
+    throw new NoSuchStateError([
+      "temperature ",
+      q.T(temperatureK),
+      ` is above the critical temperature of ${substance.name} (`,
+      q.T(critical.temperatureK),
+      "): liquid and vapor no longer coexist; the fluid is gas or supercritical fluid (PHASE.STATE)",
+    ]);
+  }
+  if (temperatureK >= triple.temperatureK) {
+    return pressureOnBranch(substance.curves.boiling, temperatureK, substance.name);
+  }
+  return pressureOnBranch(requireSublimation(substance), temperatureK, substance.name);
+}
+
+/**
+ * The inverse of {@link saturationPressure}: boiling temperature between the triple and the
+ * critical pressure, sublimation temperature below the triple-point pressure.
+ */
+export function saturationTemperature(substance: SubstanceDefinition, pressurePa: number): number {
+  checkPressure(pressurePa);
+  const triple = triplePoint(substance);
+  const critical = criticalPoint(substance);
+  if (pressurePa > critical.pressurePa) {
+    throw new NoSuchStateError([
+      "pressure ",
+      q.p(pressurePa),
+      ` is above the critical pressure of ${substance.name} (`,
+      q.p(critical.pressurePa),
+      "): there is no boiling; liquid turns into supercritical fluid without a phase change",
+    ]);
+  }
+  if (pressurePa > triple.pressurePa) {
+    return temperatureOnBranch(substance.curves.boiling, pressurePa, substance.name);
+  }
+  return temperatureOnBranch(requireSublimation(substance), pressurePa, substance.name);
+}
+
+/** Highest pressure any melting branch reaches, Pa. */
+function meltingPressureCeiling(substance: SubstanceDefinition): number {
+  return Math.max(...substance.curves.melting.map((branch) => branchPressureRange(branch)[1]));
+}
+
+/**
+ * The melting branch whose pressure band holds p and the melting temperature there.
+ * Neighbouring published equations meet at solid–solid–liquid triple points only to their
+ * printed digits (for water the ice V equation ends at 632.3993 MPa, the ice VI equation starts
+ * at 632.4 MPa); a pressure inside such a seam melts at the triple-point temperature the two
+ * equations share, which is exact to the equations' own mismatch.
+ */
+function meltingAtPressure(
+  substance: SubstanceDefinition,
+  pressurePa: number,
+): { branch: CurveBranch; temperatureK: number } {
+  const triple = triplePoint(substance);
+  if (pressurePa < triple.pressurePa) {
+    throw new NoSuchStateError([
+      "pressure ",
+      q.p(pressurePa),
+      ` is below the triple-point pressure of ${substance.name} (`,
+      q.p(triple.pressurePa),
+      "): no liquid exists, so nothing melts; the solid sublimes at PHASE.SATTEMP",
+    ]);
+  }
+  const branches = substance.curves.melting;
+  for (const branch of branches) {
+    if (branchCoversPressure(branch, pressurePa)) {
+      return { branch, temperatureK: temperatureOnBranch(branch, pressurePa, substance.name) };
+    }
+  }
+  for (let i = 0; i + 1 < branches.length; i++) {
+    const lower = branches[i]!;
+    const upper = branches[i + 1]!;
+    if (pressurePa > branchPressureRange(lower)[1] && pressurePa < branchPressureRange(upper)[0]) {
+      const seamT = lower.pressure(lower.tMin) > lower.pressure(lower.tMax) ? lower.tMin : lower.tMax;
+      return { branch: upper, temperatureK: seamT };
+    }
+  }
+  const last = branches[branches.length - 1]!;
+  throw new OutOfRangeError([
+    "pressure ",
+    q.p(pressurePa),
+    ` is above the highest melting pressure covered for ${substance.name} (`,
+    q.p(meltingPressureCeiling(substance)),
+    `, ${branchLabel(last)} at `,
+    q.T(last.tMax),
+    `, ${citation(last.model.source).short})`,
+  ]);
+}
+
+/** Melting temperature at pressure p, through whichever solid is stable at p. */
+export function meltingTemperature(substance: SubstanceDefinition, pressurePa: number): number {
+  checkPressure(pressurePa);
+  return meltingAtPressure(substance, pressurePa).temperatureK;
+}
+
+/** The solid forms with a melting curve, e.g. ["ice Ih", "ice III", …] or ["solid"]. */
+export function meltingForms(substance: SubstanceDefinition): string[] {
+  return substance.curves.melting.map((branch) => branch.solid ?? "solid");
+}
+
+function findForm(substance: SubstanceDefinition, form: string): CurveBranch {
+  const folded = foldName(form);
+  const found = substance.curves.melting.find((branch) => {
+    const name = foldName(branch.solid ?? "solid");
+    return name === folded || name === `ice${folded}`;
+  });
+  if (!found) {
+    throw new BadInputError([
+      `"${form}" is not a solid form with a melting curve for ${substance.name}; use one of: ` +
+        meltingForms(substance).join(", "),
+    ]);
+  }
+  return found;
+}
+
+/**
+ * Melting pressure at T. Where several solids melt at one temperature (water between 251.165 K
+ * and 273.31 K), the lowest-pressure branch unless `form` names another.
+ */
+export function meltingPressure(substance: SubstanceDefinition, temperatureK: number, form?: string): number {
+  checkTemperature(temperatureK);
+  if (form !== undefined && form.trim() !== "") {
+    const branch = findForm(substance, form);
+    if (!branchCoversTemperature(branch, temperatureK)) {
+      throw new NoSuchStateError([
+        "temperature ",
+        q.T(temperatureK),
+        ` is outside the ${substance.name} ${branchLabel(branch)} (`,
+        q.T(branch.tMin),
+        " to ",
+        q.T(branch.tMax),
+        `, ${citation(branch.model.source).short}): ${branch.solid ?? "the solid"} does not melt ` +
+          "at this temperature; omit the form for the stable one",
+      ]);
+    }
+    return branch.pressure(temperatureK);
+  }
+  const covering = substance.curves.melting.filter((branch) => branchCoversTemperature(branch, temperatureK));
+  if (covering.length === 0) {
+    const lowest = Math.min(...substance.curves.melting.map((branch) => branch.tMin));
+    const highest = Math.max(...substance.curves.melting.map((branch) => branch.tMax));
+    if (temperatureK < lowest) {
+      throw new NoSuchStateError([
+        "temperature ",
+        q.T(temperatureK),
+        ` is below the lowest melting temperature of ${substance.name} (`,
+        q.T(lowest),
+        `, ${citation(substance.curves.melting[0]!.model.source).short}): the liquid is not ` +
+          "stable at any pressure there, so nothing melts",
+      ]);
+    }
+    throw new OutOfRangeError([
+      "temperature ",
+      q.T(temperatureK),
+      ` is above the highest temperature of the published ${substance.name} melting curves (`,
+      q.T(highest),
+      `, ${citation(substance.curves.melting[substance.curves.melting.length - 1]!.model.source).short})`,
+    ]);
+  }
+  return Math.min(...covering.map((branch) => branch.pressure(temperatureK)));
+}
+
+/** The phase of a substance at (T, p). */
+export function phaseAt(substance: SubstanceDefinition, temperatureK: number, pressurePa: number): PhaseState {
+  checkTemperature(temperatureK);
+  checkPressure(pressurePa);
+  checkTemperatureCoverage(substance, temperatureK);
+  const triple = triplePoint(substance);
+  const critical = criticalPoint(substance);
+
+  if (pressurePa < triple.pressurePa) {
+    if (temperatureK >= triple.temperatureK) return fluidState(substance, temperatureK, pressurePa);
+    const branch = requireSublimation(substance);
+    const solid = branch.solid ?? "solid";
+    if (temperatureK < branch.tMin) {
+      // Sublimation pressure rises with temperature, so a pressure above its value at the
+      // equation's lowest temperature lies above the curve at every lower temperature too.
+      if (pressurePa > branch.pressure(branch.tMin)) return { phase: "solid", detail: solid, branch };
+      throw new OutOfRangeError([
+        "temperature ",
+        q.T(temperatureK),
+        ` is below the ${substance.name} sublimation curve's range (`,
+        q.T(branch.tMin),
+        " to ",
+        q.T(branch.tMax),
+        `, ${citation(branch.model.source).short}) and the pressure is too low to decide the phase`,
+      ]);
+    }
+    const sublimationPa = branch.pressure(temperatureK);
+    if (pressurePa > sublimationPa) return { phase: "solid", detail: solid, branch };
+    if (pressurePa === sublimationPa) return { phase: "solid + vapor", detail: `${solid} + vapor`, branch };
+    return { phase: "vapor", detail: "superheated vapor" };
+  }
+
+  const melting = meltingAtPressure(substance, pressurePa);
+  const solid = melting.branch.solid ?? "solid";
+  if (temperatureK < melting.temperatureK) return { phase: "solid", detail: solid, branch: melting.branch };
+  if (temperatureK === melting.temperatureK) {
+    return { phase: "solid + liquid", detail: `${solid} + liquid`, branch: melting.branch };
+  }
+  if (temperatureK >= critical.temperatureK) return fluidState(substance, temperatureK, pressurePa);
+  if (temperatureK < triple.temperatureK) return { phase: "liquid", detail: "compressed liquid" };
+  return fluidState(substance, temperatureK, pressurePa);
+}
+
+function fluidState(substance: SubstanceDefinition, temperatureK: number, pressurePa: number): PhaseState {
+  const critical = criticalPoint(substance);
+  if (temperatureK >= critical.temperatureK) {
+    return pressurePa >= critical.pressurePa
+      ? { phase: "supercritical fluid", detail: "supercritical fluid" }
+      : { phase: "gas", detail: "gas" };
+  }
+  const boilingPa = substance.curves.boiling.pressure(temperatureK);
+  if (pressurePa > boilingPa) return { phase: "liquid", detail: "compressed liquid" };
+  if (pressurePa === boilingPa) return { phase: "liquid + vapor", detail: "saturated liquid + vapor" };
+  return { phase: "vapor", detail: "superheated vapor" };
+}

@@ -1,0 +1,102 @@
+/**
+ * The shape of a substance definition: identity, cited constants, and which correlation serves
+ * which coexistence curve over which range. One module per substance fills it in.
+ */
+import type { Dimension } from "../errors";
+import type { CitationId } from "../sources/bibliography";
+
+/** reference: international standards and reference equations; engineering: cited handbook data. */
+export type Grade = "reference" | "engineering";
+
+/** A published correlation as a reviewer needs to see it. */
+export interface ModelInfo {
+  /** Stable id, e.g. "iapws-if97-region4". */
+  readonly id: string;
+  /** What it is, e.g. "IAPWS-IF97 region 4, Eq. (30) p_s(T) and Eq. (31) T_s(p)". */
+  readonly name: string;
+  readonly source: CitationId;
+  readonly grade: Grade;
+  /** Validity range as text with units. */
+  readonly validity: string;
+  /** Stated uncertainty (or why none is stated). */
+  readonly uncertainty: string;
+}
+
+/** Which coexistence curve a branch belongs to. */
+export type Boundary = "boiling" | "sublimation" | "melting";
+
+/** One branch of a coexistence curve: a published equation p(T) over a temperature range. */
+export interface CurveBranch {
+  readonly boundary: Boundary;
+  /** The solid on this branch (melting and sublimation), e.g. "ice Ih"; "solid" when unnamed. */
+  readonly solid?: string;
+  readonly model: ModelInfo;
+  /** Temperature range of the equation, K. */
+  readonly tMin: number;
+  readonly tMax: number;
+  /** Pressure, Pa, at T in K (no range check: callers check through core/curves). */
+  readonly pressure: (temperatureK: number) => number;
+  /** Published inverse T(p), K, at p in Pa, when there is one; otherwise it is solved for. */
+  readonly temperature?: (pressurePa: number) => number;
+  /**
+   * Published pressure range of the inverse, Pa, when it differs from p(T) at the range ends
+   * (IF97 Eq. (31) is stated from the triple-point pressure, while Eq. (30) at 273.16 K gives
+   * 611.657 000 01 Pa).
+   */
+  readonly pressureRange?: readonly [number, number];
+}
+
+/** Keys of the constants a substance may carry. */
+export type ConstantKey =
+  | "tripleTemperature"
+  | "triplePressure"
+  | "criticalTemperature"
+  | "criticalPressure"
+  | "criticalDensity"
+  | "normalBoilingPoint"
+  | "normalMeltingPoint"
+  | "molarMass"
+  | "specificGasConstant";
+
+/** A constant with its citation. */
+export interface ConstantValue {
+  readonly value: number;
+  readonly dimension: Dimension;
+  readonly source: CitationId;
+  /** Where in the source, or how it was derived from cited inputs. */
+  readonly note: string;
+}
+
+/** Limits beyond which no model of the substance answers. */
+export interface CoverageLimits {
+  /** Highest temperature any fluid model of the substance covers, K. */
+  readonly tMax: number;
+  readonly tMaxSource: CitationId;
+}
+
+/** A substance: identity, constants, curves, and the model of its phase map. */
+export interface SubstanceDefinition {
+  /** Stable id, lower case. */
+  readonly id: string;
+  /** Display name. */
+  readonly name: string;
+  readonly formula: string;
+  readonly cas: string;
+  /** ASHRAE 34 refrigerant number, when one exists. */
+  readonly refrigerant?: string;
+  /** Every name a user may type (case-insensitive); includes name, formula, CAS and refrigerant. */
+  readonly aliases: readonly string[];
+  readonly grade: Grade;
+  readonly constants: Readonly<Partial<Record<ConstantKey, ConstantValue>>>;
+  readonly curves: {
+    readonly boiling: CurveBranch;
+    readonly sublimation?: CurveBranch;
+    /** Ordered by rising pressure; contiguous where they meet at solid–solid–liquid points. */
+    readonly melting: readonly CurveBranch[];
+  };
+  /** How the phase at (T, p) is decided, and what is approximate about it. */
+  readonly stateModel: ModelInfo;
+  readonly limits: CoverageLimits;
+  /** The energy zero of the substance's enthalpies. */
+  readonly referenceState: string;
+}
