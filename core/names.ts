@@ -29,7 +29,7 @@ export function editDistance(a: string, b: string): number {
  */
 export function nearestNames(name: string, candidates: readonly string[], count = 3): string[] {
   const folded = foldName(name);
-  return candidates
+  return [...new Set(candidates)]
     .map((candidate) => {
       const other = foldName(candidate);
       const distance = other.startsWith(folded) && folded.length >= 2 ? 0.5 : editDistance(folded, other);
@@ -37,6 +37,7 @@ export function nearestNames(name: string, candidates: readonly string[], count 
     })
     .filter((entry) => entry.distance <= Math.max(2, Math.floor(folded.length / 3)))
     .sort((x, y) => x.distance - y.distance)
-    .slice(0, count)
-    .map((entry) => entry.candidate);
+    .map((entry) => entry.candidate)
+    .filter((candidate, index, all) => all.findIndex((other) => foldName(other) === foldName(candidate)) === index)
+    .slice(0, count);
 }

@@ -6,7 +6,7 @@
  *   Curves of Ordinary Water Substance; W. Wagner, T. Riethmann, R. Feistel, A. H. Harvey,
  *   J. Phys. Chem. Ref. Data 40, 043103 (2011). Melting equations of Sec. 2 for each ice.
  * Valid (each ice on its own branch, bounded by the liquid triple points):
- *   ice Ih  251.165 K ≤ T ≤ 273.16 K  (611.657 Pa … 208.566 MPa, dp/dT < 0)
+ *   ice Ih  251.165 K ≤ T ≤ 273.16 K  (611.657 Pa … 208.566 MPa, dp/dT negative)
  *   ice III 251.165 K ≤ T ≤ 256.164 K (208.566 … 350.1 MPa)
  *   ice V   256.164 K ≤ T ≤ 273.31 K  (350.1 … 632.4 MPa)
  *   ice VI  273.31 K  ≤ T ≤ 355 K     (632.4 … 2216 MPa)

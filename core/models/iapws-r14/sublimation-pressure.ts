@@ -9,7 +9,7 @@
  * Uncertainty: stated in the release's Sec. 3 (not transcribed here); the equation reproduces the
  *   release's check value 8.94735e-6 MPa at 230 K to every printed digit.
  * Notation: theta = T/T_t, pi = p/p_t with T_t = 273.16 K, p_t = 611.657 Pa;
- *   ln(pi) = theta^-1 · Σ_{i=1..3} a_i · theta^{b_i}.
+ *   ln(pi) = theta^-1 · Σ(i=1..3) a_i · theta^(b_i).
  * Deviations from the text: none.
  */
 
