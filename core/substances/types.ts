@@ -39,9 +39,9 @@ export interface CurveBranch {
   /** Published inverse T(p), K, at p in Pa, when there is one; otherwise it is solved for. */
   readonly temperature?: (pressurePa: number) => number;
   /**
-   * Published pressure range of the inverse, Pa, when it differs from p(T) at the range ends
-   * (IF97 Eq. (31) is stated from the triple-point pressure, while Eq. (30) at 273.16 K gives
-   * 611.657 000 01 Pa).
+   * Pressure range of the branch, Pa, low first: p(T) at the range ends, or the published range
+   * of the inverse where that differs (IF97 Eq. (31) is stated from the triple-point pressure,
+   * while Eq. (30) at 273.16 K gives 611.657 000 01 Pa). Computed from p(T) when absent.
    */
   readonly pressureRange?: readonly [number, number];
 }

@@ -61,7 +61,15 @@ function meltingBranch(
     tMin: bounds.tMin,
     tMax: bounds.tMax,
     pressure,
+    pressureRange: pressureSpan(pressure, bounds.tMin, bounds.tMax),
   };
+}
+
+/** Pressures at the two ends of a monotonic branch, low first, evaluated once. */
+function pressureSpan(pressure: (t: number) => number, tMin: number, tMax: number): readonly [number, number] {
+  const a = pressure(tMin);
+  const b = pressure(tMax);
+  return a < b ? [a, b] : [b, a];
 }
 
 const boiling: CurveBranch = {
@@ -101,6 +109,7 @@ const sublimation: CurveBranch = {
   tMin: SUBLIMATION_T_MIN,
   tMax: SUBLIMATION_T_MAX,
   pressure: sublimationPressureIceIh,
+  pressureRange: pressureSpan(sublimationPressureIceIh, SUBLIMATION_T_MIN, SUBLIMATION_T_MAX),
 };
 
 const melting: readonly CurveBranch[] = [
