@@ -3,6 +3,7 @@
  * ranges, calls the core in SI units and converts the answer back to the caller's units. The
  * JSDoc of each function is what Excel shows; functions.json is generated from it at build time.
  */
+import { boundarySlope, crossingsAlongPath, marginToBoundary, parseBoundary } from "../core/boundaries";
 import { constantOf, CONSTANT_CATALOG } from "../core/constants";
 import {
   meltingPressure,
@@ -14,8 +15,9 @@ import {
 import { PROVENANCE_HEADER, provenanceFor } from "../core/sources/provenance";
 import { findSubstance, SUBSTANCES } from "../core/substances/registry";
 import { fromSI, toSI } from "../core/units/units";
-import { readFlag, readNumber, readOptionalText, readText, singleCell } from "./coerce";
+import { readFlag, readNumber, readOptionalText, readText, readUnits, singleCell } from "./coerce";
 import { evaluate, table } from "./evaluate";
+import { toExcelError } from "./excel-error";
 
 /**
  * Phase of a pure substance at a temperature and pressure: solid, liquid, vapor, gas (above Tc,
@@ -164,4 +166,86 @@ export function substances(): any[][] {
       CONSTANT_CATALOG.filter((c) => s.constants[c.key]).map((c) => c.symbol).join(" "),
     ]),
   ]);
+}
+
+/**
+ * Signed distance in temperature from a state to the nearest phase boundary on its isobar,
+ * T − T_boundary (melting, boiling or sublimation): positive on the warm side.
+ * @customfunction MARGIN
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param temperature Temperature (K unless units say otherwise). A range spills.
+ * @param pressure Absolute pressure (Pa unless units say otherwise).
+ * @param [units] Unit symbols, e.g. "C bar". Result is a temperature difference in that unit.
+ * @returns Temperature margin to the nearest boundary.
+ */
+export function margin(substance: any[][], temperature: any[][], pressure: any[][], units?: any): any[][] {
+  return evaluate([substance, temperature, pressure], ["substance", "temperature", "pressure"], units, (cells, system) => {
+    const found = findSubstance(readText(cells[0], "substance"));
+    const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
+    const pressurePa = toSI(system, "pressure", readNumber(cells[2], "pressure"));
+    return fromSI(system, "temperatureDifference", marginToBoundary(found, temperatureK, pressurePa).marginK);
+  });
+}
+
+/**
+ * Slope dP/dT of a phase boundary at a temperature. Its sign says which phase is denser: negative
+ * for water's ice Ih melting curve (ice floats), positive for most substances.
+ * @customfunction SLOPE
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param boundary "melting", "boiling" or "sublimation".
+ * @param temperature Temperature (K unless units say otherwise). A range spills.
+ * @param [units] Unit symbols, e.g. "C bar": result in bar per °C (default Pa/K).
+ * @returns Slope of the boundary.
+ */
+export function slope(substance: any[][], boundary: any[][], temperature: any[][], units?: any): any[][] {
+  return evaluate([substance, boundary, temperature], ["substance", "boundary", "temperature"], units, (cells, system) => {
+    const found = findSubstance(readText(cells[0], "substance"));
+    const which = parseBoundary(readText(cells[1], "boundary"));
+    const temperatureK = toSI(system, "temperature", readNumber(cells[2], "temperature"));
+    return (boundarySlope(found, which, temperatureK) * system.temperature.scale) / system.pressure.scale;
+  });
+}
+
+/**
+ * The phase changes met along the straight path from (T1, P1) to (T2, P2), in order: what
+ * happens, where, and the phases on either side. A table with a header row.
+ * @customfunction CROSSINGS
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param t1 Start temperature.
+ * @param p1 Start pressure (absolute unless a gauge unit is given).
+ * @param t2 End temperature.
+ * @param p2 End pressure.
+ * @param [units] Unit symbols, e.g. "C bar".
+ * @returns Table of crossings.
+ */
+export function crossings(substance: any, t1: any, p1: any, t2: any, p2: any, units?: any): any[][] {
+  return table(() => {
+    const system = readUnits(units);
+    try {
+      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+      const startPa = toSI(system, "pressure", readNumber(singleCell(p1, "P1"), "P1"));
+      const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
+      const endPa = toSI(system, "pressure", readNumber(singleCell(p2, "P2"), "P2"));
+      const found2 = crossingsAlongPath(found, startK, startPa, endK, endPa);
+      const header = ["change", "temperature", "pressure", "from", "to", "fraction of path"];
+      if (found2.length === 0) {
+        const only = phaseAt(found, startK, startPa).phase;
+        return [header, ["no phase change", "", "", only, only, ""]];
+      }
+      return [
+        header,
+        ...found2.map((c) => [
+          c.change,
+          fromSI(system, "temperature", c.temperatureK),
+          fromSI(system, "pressure", c.pressurePa),
+          c.from.phase === "solid" ? c.from.detail : c.from.phase,
+          c.to.phase === "solid" ? c.to.detail : c.to.phase,
+          c.fraction,
+        ]),
+      ];
+    } catch (error) {
+      throw toExcelError(error, system);
+    }
+  });
 }
