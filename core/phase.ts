@@ -87,7 +87,8 @@ export function saturationTemperature(substance: SubstanceDefinition, pressurePa
   checkPressure(pressurePa);
   const triple = triplePoint(substance);
   const critical = criticalPoint(substance);
-  if (pressurePa > critical.pressurePa) {
+  // The boiling equation may end a rounding hair above p_c (see its pressure range).
+  if (pressurePa > Math.max(critical.pressurePa, branchPressureRange(substance.curves.boiling)[1])) {
     throw new NoSuchStateError([
       "pressure ",
       q.p(pressurePa),

@@ -98,13 +98,13 @@ export const UNIT_TOKENS: readonly UnitToken[] = [
 ];
 
 const exactLookup = new Map<string, UnitToken>();
-const foldedLookup = new Map<string, UnitToken | "ambiguous">();
+const foldedLookup = new Map<string, { unit: UnitToken; spelling: string } | "ambiguous">();
 for (const unit of UNIT_TOKENS) {
   for (const spelling of [unit.symbol, ...unit.spellings]) {
     exactLookup.set(spelling, unit);
     const folded = spelling.toLowerCase();
     const seen = foldedLookup.get(folded);
-    foldedLookup.set(folded, seen && seen !== unit ? "ambiguous" : unit);
+    foldedLookup.set(folded, seen && (seen === "ambiguous" || seen.unit !== unit) ? "ambiguous" : { unit, spelling });
   }
 }
 
@@ -112,7 +112,20 @@ function lookupToken(text: string): UnitToken | undefined {
   const exact = exactLookup.get(text);
   if (exact) return exact;
   const folded = foldedLookup.get(text.toLowerCase());
-  return folded === "ambiguous" ? undefined : folded;
+  if (folded === undefined || folded === "ambiguous") return undefined;
+  // Case is ignored, except where a token written in mixed case would turn milli into mega or
+  // back ("mPa" is not "MPa", "Mbar" is not "mbar"): a factor of 10^9 must never come from a
+  // typing slip. All-lower or all-upper tokens carry no case intent ("mpa" is MPa).
+  const typed = text[0]!;
+  const canonical = folded.spelling[0]!;
+  const mixedCase = text !== text.toLowerCase() && text !== text.toUpperCase();
+  if (mixedCase && typed !== canonical && typed.toLowerCase() === "m") {
+    throw new BadInputError([
+      `unit "${text}" reads as ${typed === "m" ? "milli" : "mega"}-${folded.spelling.slice(1)}, which Phasecell ` +
+        `does not offer; write "${folded.spelling}" if that is what you mean (case matters for m and M)`,
+    ]);
+  }
+  return folded.unit;
 }
 
 /** The units a call works in: one token per dimension (SI where none was given). */

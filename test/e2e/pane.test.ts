@@ -1,0 +1,341 @@
+/**
+ * The built shared page (dist/taskpane.html) in headless Chromium, outside Excel: office.js is
+ * served from the npm fixture in place of Microsoft's CDN, every other request that would leave
+ * 127.0.0.1 is aborted and recorded, and the pane must show core's constants, the cautions and the
+ * outside-Excel notice, legibly at 350 px in light and dark schemes. Screenshots go to
+ * test-artifacts/ (not committed).
+ *
+ * Needs `npm run build` first and Debian's chromium (CHROMIUM_PATH, default /usr/bin/chromium).
+ */
+import { existsSync, mkdirSync, readFileSync, statSync } from "node:fs";
+import { createServer, type Server } from "node:http";
+import type { AddressInfo } from "node:net";
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { constantOf } from "../../core/constants";
+import { formatNumber } from "../../core/errors";
+import { findSubstance } from "../../core/substances/registry";
+import { fromSI } from "../../core/units/units";
+import { DISPLAY_UNITS } from "../../taskpane/data/display-units";
+import { expectClose } from "../helpers/expect-close";
+
+const REPO = fileURLToPath(new URL("../..", import.meta.url));
+const DIST = path.join(REPO, "dist");
+const ARTIFACTS = path.join(REPO, "test-artifacts");
+const OFFICE_JS_DIST = path.join(REPO, "node_modules", "@microsoft", "office-js", "dist");
+const CDN_HOST = "appsforoffice.microsoft.com";
+const CDN_PREFIX = "/lib/1/hosted/";
+const CHROMIUM = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
+const HAVE_CHROMIUM = existsSync(CHROMIUM);
+
+const CONTENT_TYPES: Readonly<Record<string, string>> = {
+  ".html": "text/html; charset=utf-8",
+  ".js": "text/javascript; charset=utf-8",
+  ".css": "text/css; charset=utf-8",
+  ".json": "application/json",
+  ".map": "application/json",
+  ".png": "image/png",
+  ".xml": "application/xml",
+};
+
+/** Serves dist/ on 127.0.0.1 at a free port; nothing outside dist/ is reachable. */
+function serveDist(): Promise<Server> {
+  const server = createServer((request, response) => {
+    const pathname = decodeURIComponent(new URL(request.url ?? "/", "http://127.0.0.1").pathname);
+    const file = path.join(DIST, path.normalize(pathname === "/" ? "/taskpane.html" : pathname));
+    if (!file.startsWith(DIST + path.sep) || !existsSync(file) || !statSync(file).isFile()) {
+      response.writeHead(404, { "content-type": "text/plain" }).end("not found");
+      return;
+    }
+    response
+      .writeHead(200, { "content-type": CONTENT_TYPES[path.extname(file)] ?? "application/octet-stream" })
+      .end(readFileSync(file));
+  });
+  return new Promise((resolve) => server.listen(0, "127.0.0.1", () => resolve(server)));
+}
+
+/** The file of the office.js package that stands in for a CDN address, or null. */
+function officeFixtureFor(url: URL): string | null {
+  if (!url.pathname.startsWith(CDN_PREFIX)) return null;
+  const file = path.join(OFFICE_JS_DIST, path.normalize(url.pathname.slice(CDN_PREFIX.length)));
+  return file.startsWith(OFFICE_JS_DIST + path.sep) && existsSync(file) ? file : null;
+}
+
+/** WCAG 2.x contrast of every visible text against its effective background, in the page. */
+function lowContrastTexts(page: Page, minimum: number): Promise<string[]> {
+  return page.evaluate((min) => {
+    const parse = (color: string): [number, number, number, number] => {
+      const m = /rgba?\(([^)]+)\)/.exec(color);
+      if (!m) return [0, 0, 0, 0];
+      const parts = m[1]!.split(/[\s,/]+/).filter(Boolean).map(Number);
+      return [parts[0]!, parts[1]!, parts[2]!, parts[3] ?? 1];
+    };
+    const channel = (c: number) => {
+      const s = c / 255;
+      return s <= 0.04045 ? s / 12.92 : ((s + 0.055) / 1.055) ** 2.4;
+    };
+    const luminance = ([r, g, b]: number[]) => 0.2126 * channel(r!) + 0.7152 * channel(g!) + 0.0722 * channel(b!);
+    const background = (element: Element | null): number[] => {
+      for (let e = element; e; e = e.parentElement) {
+        const c = parse(getComputedStyle(e).backgroundColor);
+        if (c[3] > 0.99) return c;
+      }
+      return parse(getComputedStyle(document.documentElement).backgroundColor)[3] > 0.99
+        ? parse(getComputedStyle(document.documentElement).backgroundColor)
+        : [255, 255, 255, 1];
+    };
+    const failures: string[] = [];
+    for (const element of Array.from(document.body.querySelectorAll("*"))) {
+      const ownText = Array.from(element.childNodes)
+        .filter((n) => n.nodeType === Node.TEXT_NODE)
+        .map((n) => n.textContent ?? "")
+        .join("")
+        .trim();
+      if (!ownText || !element.checkVisibility()) continue;
+      const style = getComputedStyle(element);
+      const fg = parse(style.color);
+      const bg = background(element);
+      const blended = [0, 1, 2].map((i) => fg[i]! * fg[3] + bg[i]! * (1 - fg[3]));
+      const [l1, l2] = [luminance(blended), luminance(bg)].sort((a, b) => b - a);
+      const ratio = (l1! + 0.05) / (l2! + 0.05);
+      if (ratio < min) failures.push(`${element.tagName.toLowerCase()} "${ownText.slice(0, 40)}" ${ratio.toFixed(2)}:1`);
+    }
+    return failures;
+  }, minimum);
+}
+
+if (!HAVE_CHROMIUM) {
+  const reason = `no Chromium at ${CHROMIUM} (install Debian's chromium or set CHROMIUM_PATH)`;
+  console.warn(`task pane browser tests skipped: ${reason}`);
+  describe("task pane in Chromium", () => {
+    it.skip(`skipped: ${reason}`, () => {});
+  });
+} else {
+  describe("task pane in Chromium", () => {
+    let server: Server;
+    let browser: Browser;
+    let context: BrowserContext;
+    let page: Page;
+    let base = "";
+    const intercepted: string[] = [];
+    const blocked: string[] = [];
+    const websockets: string[] = [];
+    const pageErrors: string[] = [];
+    const consoleErrors: string[] = [];
+    const water = findSubstance("water");
+
+    beforeAll(async () => {
+      if (!existsSync(path.join(DIST, "taskpane.html"))) {
+        throw new Error("dist/taskpane.html not found: run `npm run build` before the browser tests");
+      }
+      mkdirSync(ARTIFACTS, { recursive: true });
+      server = await serveDist();
+      base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+      browser = await chromium.launch({
+        executablePath: CHROMIUM,
+        headless: true,
+        args: [
+          "--no-sandbox",
+          "--disable-gpu",
+          "--disable-background-networking",
+          "--disable-component-update",
+          "--disable-sync",
+          "--no-first-run",
+        ],
+      });
+      context = await browser.newContext({ viewport: { width: 350, height: 700 }, colorScheme: "light" });
+      await context.route("**/*", (route) => {
+        const url = new URL(route.request().url());
+        if (url.hostname === CDN_HOST) {
+          intercepted.push(url.href);
+          const file = officeFixtureFor(url);
+          return file
+            ? route.fulfill({ path: file, contentType: "text/javascript; charset=utf-8" })
+            : route.fulfill({ status: 404, body: "not in the office.js fixture" });
+        }
+        if (url.hostname === "127.0.0.1") return route.continue();
+        blocked.push(url.href);
+        return route.abort();
+      });
+      await context.addInitScript(() => {
+        class CellError extends Error {
+          constructor(
+            readonly code: string,
+            message = "",
+          ) {
+            super(message);
+          }
+        }
+        (window as any).CustomFunctions = {
+          Error: CellError,
+          ErrorCode: {
+            invalidValue: "#VALUE!",
+            notAvailable: "#N/A",
+            divisionByZero: "#DIV/0!",
+            invalidNumber: "#NUM!",
+            nullReference: "#NULL!",
+            invalidName: "#NAME?",
+            invalidReference: "#REF!",
+          },
+        };
+      });
+      page = await context.newPage();
+      page.on("websocket", (ws) => websockets.push(ws.url()));
+      page.on("pageerror", (error) => pageErrors.push(error.message));
+      page.on("console", (message) => {
+        if (message.type() === "error") consoleErrors.push(message.text());
+      });
+      await page.goto(`${base}/taskpane.html`);
+      await page.locator("table.constants tr.constant").first().waitFor();
+    });
+
+    afterAll(async () => {
+      await browser?.close();
+      await new Promise<void>((resolve) => (server ? server.close(() => resolve()) : resolve()));
+    });
+
+    it("loads office.js from the intercepted CDN address and makes no other outside request", async () => {
+      await page.locator("#outside-excel").waitFor();
+      expect(intercepted.some((u) => u.endsWith("/office.js")), intercepted.join(", ")).toBe(true);
+      expect(intercepted.every((u) => new URL(u).pathname.startsWith(CDN_PREFIX))).toBe(true);
+      expect(blocked, `requests that would have left the machine: ${blocked.join(", ")}`).toEqual([]);
+      expect(websockets).toEqual([]);
+    });
+
+    it("runs without script errors or Content-Security-Policy violations", () => {
+      expect(pageErrors).toEqual([]);
+      expect(consoleErrors.filter((m) => /Content Security Policy|Refused to/i.test(m))).toEqual([]);
+      expect(consoleErrors).toEqual([]);
+    });
+
+    it("shows the outside-Excel notice and the cautions", async () => {
+      const notice = page.locator("#outside-excel");
+      await expect.poll(() => notice.isVisible()).toBe(true);
+      expect(await notice.textContent()).toMatch(/reference data only/);
+      const cautions = page.locator("aside.cautions");
+      expect(await cautions.isVisible()).toBe(true);
+      const text = (await cautions.textContent()) ?? "";
+      for (const word of ["High pressure", "Cryogenic", "Asphyxiant", "Dry ice", "Steam", "licensed"]) {
+        expect(text).toContain(word);
+      }
+    });
+
+    it("offers every substance of the registry", async () => {
+      const options = await page.locator("#substance-select option").evaluateAll((os) =>
+        os.map((o) => (o as HTMLOptionElement).value),
+      );
+      expect(options).toEqual(["water"]);
+    });
+
+    for (const units of DISPLAY_UNITS) {
+      it(`shows Tc, Pc, Tt and Pt as core gives them in ${units.label}`, async () => {
+        await page.selectOption("#units-select", units.id);
+        await page.locator(`.reference-data[data-units="${units.id}"]`).waitFor();
+        for (const symbol of ["Tc", "Pc", "Tt", "Pt"]) {
+          const constant = constantOf(water, symbol);
+          const expected = formatNumber(fromSI(units.system, constant.dimension, constant.value));
+          const row = page.locator(`tr.constant[data-symbol="${symbol}"]`);
+          expect(await row.locator(".value").textContent(), symbol).toBe(expected);
+        }
+      });
+    }
+
+    it("shows the published values in SI", async () => {
+      // IAPWS R7-97(2012) (IF97): Tc Eq. (2), pc Eq. (3), Tt and pt Eq. (9), as printed.
+      await page.selectOption("#units-select", "si");
+      await page.locator('.reference-data[data-units="si"]').waitFor();
+      const shown = async (symbol: string) =>
+        `${await page.locator(`tr.constant[data-symbol="${symbol}"] .value`).textContent()} ` +
+        `${await page.locator(`tr.constant[data-symbol="${symbol}"] .unit`).textContent()}`;
+      expect(await shown("Tc")).toBe("647.096 K");
+      expect(await shown("Pc")).toBe("22064000 Pa");
+      expect(await shown("Tt")).toBe("273.16 K");
+      expect(await shown("Pt")).toBe("611.657 Pa");
+    });
+
+    it("is keyboard operable: selectors first, then a source opens its full reference", async () => {
+      await page.locator("body").click({ position: { x: 1, y: 1 } });
+      await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+      await page.keyboard.press("Tab");
+      expect(await page.evaluate(() => document.activeElement?.id)).toBe("substance-select");
+      await page.keyboard.press("Tab");
+      expect(await page.evaluate(() => document.activeElement?.id)).toBe("units-select");
+      await page.keyboard.press("Tab");
+      const controls = await page.evaluate(() => document.activeElement?.getAttribute("aria-controls"));
+      expect(controls).toBe("constant-detail-tripleTemperature");
+      const detail = page.locator(`#${controls}`);
+      expect(await detail.isVisible()).toBe(false);
+      await page.keyboard.press("Enter");
+      expect(await detail.isVisible()).toBe(true);
+      expect(await detail.textContent()).toContain("doi:");
+      await page.keyboard.press("Enter");
+      expect(await detail.isVisible()).toBe(false);
+    });
+
+    it("fits 350 px and 320 px without sideways scrolling, in light and dark, with 4.5:1 text contrast", async () => {
+      // Open every expandable part so that their text is laid out and measured too.
+      const openAll = () =>
+        page.evaluate(() => {
+          document.querySelectorAll("details").forEach((d) => (d.open = true));
+          document.querySelectorAll<HTMLElement>("[id^='constant-detail-'], [id^='curve-source-']").forEach((e) => (e.hidden = false));
+          document.querySelectorAll("button.cite").forEach((b) => b.setAttribute("aria-expanded", "true"));
+        });
+      const closeAll = () =>
+        page.evaluate(() => {
+          document.querySelectorAll("details").forEach((d) => (d.open = false));
+          document.querySelectorAll<HTMLElement>("[id^='constant-detail-'], [id^='curve-source-']").forEach((e) => (e.hidden = true));
+          document.querySelectorAll("button.cite").forEach((b) => b.setAttribute("aria-expanded", "false"));
+        });
+      const overflow = () => page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+      await page.selectOption("#units-select", "c-bar");
+      await page.locator('.reference-data[data-units="c-bar"]').waitFor();
+      for (const scheme of ["light", "dark"] as const) {
+        await page.emulateMedia({ colorScheme: scheme });
+        await page.setViewportSize({ width: 350, height: 700 });
+        const background = await page.evaluate(() => getComputedStyle(document.body).backgroundColor);
+        expect(background, `${scheme} page background`).toBe(scheme === "dark" ? "rgb(31, 31, 31)" : "rgb(255, 255, 255)");
+        await closeAll();
+        await page.evaluate(() => window.scrollTo(0, 0));
+        await page.screenshot({ path: path.join(ARTIFACTS, `pane-350-${scheme}.png`) });
+        await page.screenshot({ path: path.join(ARTIFACTS, `pane-350-${scheme}-full.png`), fullPage: true });
+        expect(await lowContrastTexts(page, 4.5), `${scheme}, closed`).toEqual([]);
+        await openAll();
+        expect(await overflow(), `${scheme} at 350 px, all open`).toBeLessThanOrEqual(0);
+        expect(await lowContrastTexts(page, 4.5), `${scheme}, all open`).toEqual([]);
+        await page.screenshot({ path: path.join(ARTIFACTS, `pane-350-${scheme}-open-full.png`), fullPage: true });
+        await page.setViewportSize({ width: 320, height: 700 });
+        expect(await overflow(), `${scheme} at 320 px, all open`).toBeLessThanOrEqual(0);
+        await closeAll();
+        expect(await overflow(), `${scheme} at 320 px`).toBeLessThanOrEqual(0);
+        await page.evaluate(() => window.scrollTo(0, 0));
+        await page.screenshot({ path: path.join(ARTIFACTS, `pane-320-${scheme}.png`) });
+      }
+      await page.emulateMedia({ colorScheme: "light" });
+      await page.setViewportSize({ width: 350, height: 700 });
+    });
+
+    const functionsBundle = existsSync(path.join(DIST, "functions.js"));
+    it.skipIf(!functionsBundle)("runs PHASE.SATPRESSURE through the page's associated functions", async () => {
+      const names = await page.evaluate(() => Object.keys((window as any).CustomFunctions?._association?.mappings ?? {}));
+      expect(names).toContain("SATPRESSURE");
+      const call = (kelvins: number[][]) =>
+        page.evaluate(
+          (t) => (window as any).CustomFunctions._association.mappings["SATPRESSURE"]([["water"]], t) as unknown,
+          kelvins,
+        ) as Promise<number[][]>;
+      // IF97 Eq. (31) at 101 325 Pa gives 373.1243 K (IAPWS SR1-86 check value; IF97 Eq. (31)),
+      // printed to 0.1 mK; dp/dT there is about 3.6 kPa/K, so Eq. (30) must return 101 325 Pa
+      // within 3.6e3 × 5e-5 ≈ 0.2 Pa.
+      const [[atmosphere]] = (await call([[373.1243]])) as [[number]];
+      expectClose(atmosphere, 101325, { abs: 0.2 });
+      // IAPWS R7-97(2012) (IF97), Table 35, Eq. (30) check values, 9 significant digits printed
+      // (in MPa); tolerance: half a unit of the last printed digit.
+      const table35 = await call([[300], [500], [600]]);
+      expectClose(table35[0]![0]!, 0.353658941e-2 * 1e6, { abs: 0.5e-11 * 1e6 });
+      expectClose(table35[1]![0]!, 0.263889776e1 * 1e6, { abs: 0.5e-8 * 1e6 });
+      expectClose(table35[2]![0]!, 0.123443146e2 * 1e6, { abs: 0.5e-7 * 1e6 });
+    });
+  });
+}
