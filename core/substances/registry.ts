@@ -31,9 +31,9 @@ export function findSubstance(name: string): SubstanceDefinition {
   if (found) return found;
   const allNames = SUBSTANCES.flatMap((s) => [s.name, ...s.aliases]);
   const near = nearestNames(name, allNames);
-  const hint = near.length > 0 ? `Did you mean ${near.map((n) => `"${n}"`).join(" or ")}?` : "";
+  const hint = near.length > 0 ? `Did you mean ${near.map((n) => `"${n}"`).join(" or ")}? ` : "";
   throw new BadInputError([
-    `unknown substance "${name.trim()}". ${hint} Known substances: ` +
+    `unknown substance "${name.trim()}". ${hint}Known substances: ` +
       `${SUBSTANCES.map((s) => s.name).join(", ")} (names, formulas, CAS and refrigerant numbers ` +
       `all work; PHASE.SUBSTANCES lists them)`,
   ]);
