@@ -52,6 +52,15 @@ const entries = [
     locator: "IAPWS R6-95(2018); doi:10.1063/1.1461829",
   },
   {
+    id: "iapws-sr1-86",
+    short: "IAPWS SR1-86(1992)",
+    reference:
+      "IAPWS, Revised Supplementary Release on Saturation Properties of Ordinary Water Substance, " +
+      "IAPWS SR1-86(1992); W. Wagner, A. Pruss, J. Phys. Chem. Ref. Data 22, 783 (1993)",
+    // DOI from memory.
+    locator: "IAPWS SR1-86(1992); doi:10.1063/1.555926",
+  },
+  {
     id: "its-90",
     short: "ITS-90",
     reference:
