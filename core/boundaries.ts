@@ -2,7 +2,7 @@
  * Distances to and slopes of phase boundaries, and the phase changes met along a straight path in
  * the (T, p) plane. Built on the curve look-ups of core/phase; no enthalpy needed.
  */
-import { branchCoversTemperature, branchLabel } from "./curves";
+import { atLeast, atMost, branchCoversTemperature, branchLabel } from "./curves";
 import { BadInputError, NoSuchStateError, OutOfRangeError, q } from "./errors";
 import { foldName } from "./names";
 import {
@@ -93,7 +93,7 @@ export function boundarySlope(substance: SubstanceDefinition, boundary: Boundary
   const critical = criticalPoint(substance);
   if (boundary === "boiling") {
     const branch = substance.curves.boiling;
-    if (temperatureK > critical.temperatureK || temperatureK < triple.temperatureK) {
+    if (!atMost(temperatureK, critical.temperatureK) || !atLeast(temperatureK, triple.temperatureK)) {
       throw new NoSuchStateError([
         "temperature ",
         q.T(temperatureK),
@@ -109,7 +109,7 @@ export function boundarySlope(substance: SubstanceDefinition, boundary: Boundary
   if (boundary === "sublimation") {
     const branch = substance.curves.sublimation;
     if (!branch) throw new NoSuchStateError([`no sublimation curve is available for ${substance.name}`]);
-    if (temperatureK > triple.temperatureK) {
+    if (!atMost(temperatureK, triple.temperatureK)) {
       throw new NoSuchStateError([
         "temperature ",
         q.T(temperatureK),

@@ -31,15 +31,32 @@ export function branchPressureRange(branch: CurveBranch): readonly [number, numb
   return a < b ? [a, b] : [b, a];
 }
 
+/**
+ * Relative slack at the ends of every range. Converting a user's value to SI rounds it
+ * (0.01 °C becomes 273.159 999 999 999 97 K, not the triple point's 273.16 K); a value within
+ * this slack of a range end is taken as that end, never as outside the range.
+ */
+export const EDGE_TOLERANCE = 1e-12;
+
+/** x ≤ limit, allowing the rounding slack of {@link EDGE_TOLERANCE}. */
+export function atMost(x: number, limit: number): boolean {
+  return x <= limit + Math.abs(limit) * EDGE_TOLERANCE;
+}
+
+/** x ≥ limit, allowing the rounding slack of {@link EDGE_TOLERANCE}. */
+export function atLeast(x: number, limit: number): boolean {
+  return x >= limit - Math.abs(limit) * EDGE_TOLERANCE;
+}
+
 /** True when T lies inside the branch's temperature range. */
 export function branchCoversTemperature(branch: CurveBranch, temperatureK: number): boolean {
-  return temperatureK >= branch.tMin && temperatureK <= branch.tMax;
+  return atLeast(temperatureK, branch.tMin) && atMost(temperatureK, branch.tMax);
 }
 
 /** True when p lies inside the branch's pressure range. */
 export function branchCoversPressure(branch: CurveBranch, pressurePa: number): boolean {
   const [low, high] = branchPressureRange(branch);
-  return pressurePa >= low && pressurePa <= high;
+  return atLeast(pressurePa, low) && atMost(pressurePa, high);
 }
 
 function sourceTag(branch: CurveBranch): string {
@@ -87,8 +104,13 @@ export function temperatureOnBranch(branch: CurveBranch, pressurePa: number, sub
     ]);
   }
   if (branch.temperature) return branch.temperature(pressurePa);
-  if (pressurePa === branchPressureAtTMin(branch)) return branch.tMin;
-  if (pressurePa === branchPressureAtTMax(branch)) return branch.tMax;
+  const atTMin = branchPressureAtTMin(branch);
+  const atTMax = branchPressureAtTMax(branch);
+  // At or past an end (within the rounding slack the range check allowed), the end itself: the
+  // solver needs a sign change inside the bracket.
+  const rising = atTMax > atTMin;
+  if (pressurePa <= Math.min(atTMin, atTMax)) return rising ? branch.tMin : branch.tMax;
+  if (pressurePa >= Math.max(atTMin, atTMax)) return rising ? branch.tMax : branch.tMin;
   // Solve in ln p: sublimation pressures span tens of decades, and ln p is close to linear in 1/T
   // on every vapour curve, which keeps the bracketed solver on its fast interpolation steps.
   const target = Math.log(pressurePa);

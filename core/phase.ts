@@ -6,6 +6,7 @@
  * check. SI in (K, Pa), SI out; errors are typed (see core/errors).
  */
 import {
+  atMost,
   branchCoversPressure,
   branchCoversTemperature,
   branchLabel,
@@ -64,7 +65,7 @@ export function saturationPressure(substance: SubstanceDefinition, temperatureK:
   checkTemperature(temperatureK);
   const triple = triplePoint(substance);
   const critical = criticalPoint(substance);
-  if (temperatureK > critical.temperatureK) {
+  if (!atMost(temperatureK, critical.temperatureK)) {
     throw new NoSuchStateError([
       "temperature ",
       q.T(temperatureK),

@@ -12,6 +12,7 @@ import {
   saturationPressure,
   saturationTemperature,
 } from "../core/phase";
+import { endState, isobaricPath, latentHeat, parseTransition, pathEnergy, specificEnthalpy } from "../core/path";
 import { PROVENANCE_HEADER, provenanceFor } from "../core/sources/provenance";
 import { findSubstance, SUBSTANCES } from "../core/substances/registry";
 import { fromSI, toSI } from "../core/units/units";
@@ -247,5 +248,142 @@ export function crossings(substance: any, t1: any, p1: any, t2: any, p2: any, un
     } catch (error) {
       throw toExcelError(error, system);
     }
+  });
+}
+
+/**
+ * Heat to take a mass from T1 to T2 at constant pressure, latent heats included: positive when
+ * heat is added, negative when removed.
+ * @customfunction PATHENERGY
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param mass Mass (kg unless units say otherwise; an amount such as mol with an amount unit).
+ * @param t1 Start temperature.
+ * @param t2 End temperature.
+ * @param pressure Absolute pressure of the isobar (gauge with barg, psig, kPag).
+ * @param [units] Unit symbols, e.g. "C bar kJ kg". Result in the energy unit (default J).
+ * @returns Heat for the whole mass.
+ */
+export function pathEnergyFn(substance: any[][], mass: any[][], t1: any[][], t2: any[][], pressure: any[][], units?: any): any[][] {
+  return evaluate([substance, mass, t1, t2, pressure], ["substance", "mass", "T1", "T2", "pressure"], units, (cells, system) => {
+    const found = findSubstance(readText(cells[0], "substance"));
+    const molarMass = found.constants.molarMass?.value;
+    const massKg = toSI(system, "mass", readNumber(cells[1], "mass"), molarMass);
+    const startK = toSI(system, "temperature", readNumber(cells[2], "T1"));
+    const endK = toSI(system, "temperature", readNumber(cells[3], "T2"));
+    const pressurePa = toSI(system, "pressure", readNumber(cells[4], "pressure"));
+    return fromSI(system, "energy", pathEnergy(found, massKg, startK, endK, pressurePa));
+  });
+}
+
+/**
+ * The steps of heating or cooling a mass from T1 to T2 at constant pressure: one row per step
+ * (heat or cool a phase, melt, freeze, boil, condense, sublime, deposit) with its temperatures,
+ * energy and running total. A table with a header row.
+ * @customfunction PATH
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param mass Mass (kg unless units say otherwise).
+ * @param t1 Start temperature.
+ * @param t2 End temperature.
+ * @param pressure Absolute pressure of the isobar.
+ * @param [units] Unit symbols, e.g. "C bar kJ kg".
+ * @returns Step table.
+ */
+export function path(substance: any, mass: any, t1: any, t2: any, pressure: any, units?: any): any[][] {
+  return table(() => {
+    const system = readUnits(units);
+    try {
+      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+      const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
+      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+      const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
+      const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
+      const steps = isobaricPath(found, massKg, startK, endK, pressurePa);
+      const rows: (string | number)[][] = [["step", "what happens", "from", "to", "energy", "running total"]];
+      let total = 0;
+      steps.forEach((step, index) => {
+        total += step.energyJ;
+        rows.push([
+          index + 1,
+          step.action,
+          fromSI(system, "temperature", step.fromK),
+          fromSI(system, "temperature", step.toK),
+          fromSI(system, "energy", step.energyJ),
+          fromSI(system, "energy", total),
+        ]);
+      });
+      if (steps.length === 0) rows.push([0, "no change (T1 equals T2)", fromSI(system, "temperature", startK), fromSI(system, "temperature", endK), 0, 0]);
+      return rows;
+    } catch (error) {
+      throw toExcelError(error, system);
+    }
+  });
+}
+
+/**
+ * Where a mass ends after adding (or, if negative, removing) a heat at constant pressure: final
+ * temperature, final state (e.g. "ice Ih + liquid" when it stops inside a phase change) and the
+ * mass fraction converted by that change. The inverse of PATHENERGY.
+ * @customfunction ENDSTATE
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param mass Mass (kg unless units say otherwise).
+ * @param t1 Start temperature.
+ * @param heat Heat added (negative: removed), in the energy unit (default J).
+ * @param pressure Absolute pressure of the isobar.
+ * @param [units] Unit symbols, e.g. "C bar kJ kg".
+ * @returns One row: final temperature, final state, converted fraction (blank outside a phase change).
+ */
+export function endStateFn(substance: any, mass: any, t1: any, heat: any, pressure: any, units?: any): any[][] {
+  return table(() => {
+    const system = readUnits(units);
+    try {
+      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+      const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
+      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+      const heatJ = toSI(system, "energy", readNumber(singleCell(heat, "heat"), "heat"));
+      const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
+      const result = endState(found, massKg, startK, heatJ, pressurePa);
+      return [[fromSI(system, "temperature", result.temperatureK), result.state, result.convertedFraction ?? ""]];
+    } catch (error) {
+      throw toExcelError(error, system);
+    }
+  });
+}
+
+/**
+ * Specific enthalpy at a temperature and pressure on the substance's reference state (water:
+ * IAPWS, zero internal energy and entropy of the saturated liquid at the triple point), so any
+ * change of state is mass × (h2 − h1).
+ * @customfunction ENTHALPY
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param temperature Temperature. A range spills.
+ * @param pressure Absolute pressure.
+ * @param [units] Unit symbols, e.g. "C bar kJ kg" (result in kJ/kg); an amount unit gives molar values.
+ * @returns Specific enthalpy (default J/kg).
+ */
+export function enthalpy(substance: any[][], temperature: any[][], pressure: any[][], units?: any): any[][] {
+  return evaluate([substance, temperature, pressure], ["substance", "temperature", "pressure"], units, (cells, system) => {
+    const found = findSubstance(readText(cells[0], "substance"));
+    const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
+    const pressurePa = toSI(system, "pressure", readNumber(cells[2], "pressure"));
+    return fromSI(system, "specificEnergy", specificEnthalpy(found, temperatureK, pressurePa), found.constants.molarMass?.value);
+  });
+}
+
+/**
+ * Specific latent heat of fusion, vaporization or sublimation at the coexistence point at a
+ * temperature.
+ * @customfunction LATENTHEAT
+ * @param substance Name, formula, CAS number or refrigerant number.
+ * @param transition "fusion", "vaporization" or "sublimation".
+ * @param temperature Temperature on the coexistence curve. A range spills.
+ * @param [units] Unit symbols, e.g. "C kJ kg" (result in kJ/kg).
+ * @returns Specific latent heat (default J/kg).
+ */
+export function latentHeatFn(substance: any[][], transition: any[][], temperature: any[][], units?: any): any[][] {
+  return evaluate([substance, transition, temperature], ["substance", "transition", "temperature"], units, (cells, system) => {
+    const found = findSubstance(readText(cells[0], "substance"));
+    const which = parseTransition(readText(cells[1], "transition"));
+    const temperatureK = toSI(system, "temperature", readNumber(cells[2], "temperature"));
+    return fromSI(system, "specificEnergy", latentHeat(found, which, temperatureK), found.constants.molarMass?.value);
   });
 }

@@ -74,6 +74,23 @@ export interface CoverageLimits {
   readonly tMaxSource: CitationId;
 }
 
+/** Which side of a coexistence curve an enthalpy is wanted on; "vapor" covers gas and supercritical fluid. */
+export type PhaseSide = "solid" | "liquid" | "vapor";
+
+/** Specific enthalpy of each phase of a substance, on its stated reference state. */
+export interface EnthalpyModel {
+  /** The correlations used, for PHASE.SOURCE and the pane. */
+  readonly models: readonly ModelInfo[];
+  /**
+   * Specific enthalpy, J/kg, of the phase on `side` at (T, p); `solid` names the solid form (e.g.
+   * "ice Ih") when side is "solid". Throws typed errors outside the models' ranges and where no
+   * model exists (NoSuchStateError).
+   */
+  readonly enthalpy: (side: PhaseSide, temperatureK: number, pressurePa: number, solid: string) => number;
+  /** Lowest and highest temperature, K, at which some phase has an enthalpy on the isobar p. */
+  readonly temperatureLimits: (pressurePa: number) => readonly [number, number];
+}
+
 /** A substance: identity, constants, curves, and the model of its phase map. */
 export interface SubstanceDefinition {
   /** Stable id, lower case. */
@@ -99,4 +116,6 @@ export interface SubstanceDefinition {
   readonly limits: CoverageLimits;
   /** The energy zero of the substance's enthalpies. */
   readonly referenceState: string;
+  /** Enthalpy of its phases, where modelled. */
+  readonly enthalpy?: EnthalpyModel;
 }

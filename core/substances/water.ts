@@ -26,6 +26,7 @@ import {
   sublimationPressureIceIh,
 } from "../models/iapws-r14/sublimation-pressure";
 import type { CurveBranch, ModelInfo, SubstanceDefinition } from "./types";
+import { waterEnthalpy } from "./water-enthalpy";
 
 /** Triple point, IF97 Eq. (9); the same values are the reducing constants of R14-08 and R10-06. */
 const TRIPLE_T = 273.16;
@@ -185,4 +186,5 @@ export const water: SubstanceDefinition = {
   limits: { tMax: 2273.15, tMaxSource: "iapws-if97" },
   referenceState:
     "IAPWS: internal energy and entropy of the saturated liquid at the triple point are zero",
+  enthalpy: waterEnthalpy,
 };
