@@ -2,6 +2,7 @@
  * Speed of the hot paths, measured on one core in Node. Run with `npm run bench`.
  * Each case runs for a fixed wall-clock budget after a warm-up and reports evaluations per second.
  */
+import { pathEnergy } from "../core/path";
 import { phaseAt, saturationPressure, saturationTemperature, meltingTemperature } from "../core/phase";
 import { findSubstance } from "../core/substances/registry";
 
@@ -42,6 +43,14 @@ async function main(): Promise<void> {
     { name: "core saturationTemperature (IF97 Eq. 31)", run: (i) => saturationTemperature(water, 1e3 + (i % 1000) * 2e4) },
     { name: "core meltingTemperature (R14-08 inverted)", run: (i) => meltingTemperature(water, 1e5 + (i % 1000) * 1e6) },
     { name: "core phaseAt", run: (i) => phaseAt(water, 200 + (i % 500), 10 ** (2 + (i % 7))) },
+    // Goal: an isobaric path energy for water at 100 000 evaluations per second or more.
+    { name: "core pathEnergy, water, ice to steam at 1 atm", run: (i) => pathEnergy(water, 1, 250 + (i % 10), 420, 101325) },
+    { name: "core pathEnergy, water, liquid to liquid at 5 bar", run: (i) => pathEnergy(water, 1, 290 + (i % 10), 350, 5e5) },
+    {
+      name: "PHASE.PATHENERGY over a 1000-cell column (per cell)",
+      run: () => functions.pathEnergyFn([["water"]], [[1]], column, [[120]], [[1.01325]], "C bar kJ kg"),
+      perCall: 1000,
+    },
     {
       name: "PHASE.STATE over a 1000-cell column (per cell)",
       run: () => functions.state([["water"]], column, [[1.01325]], "C bar"),

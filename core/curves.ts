@@ -111,8 +111,15 @@ export function temperatureOnBranch(branch: CurveBranch, pressurePa: number, sub
   const rising = atTMax > atTMin;
   if (pressurePa <= Math.min(atTMin, atTMax)) return rising ? branch.tMin : branch.tMax;
   if (pressurePa >= Math.max(atTMin, atTMax)) return rising ? branch.tMax : branch.tMin;
-  // Solve in ln p: sublimation pressures span tens of decades, and ln p is close to linear in 1/T
-  // on every vapour curve, which keeps the bracketed solver on its fast interpolation steps.
+  // Vapour curves are solved in ln p: sublimation pressures span tens of decades and ln p is close
+  // to linear in 1/T there. Melting curves are close to linear in p itself (ice Ih: ln p runs from
+  // 6.4 to 19 over 22 K while p is nearly a straight line), which keeps the solver on its fast
+  // interpolation steps.
+  if (branch.boundary === "melting") {
+    return solveBracketed((t) => branch.pressure(t) - pressurePa, branch.tMin, branch.tMax, {
+      relTolerance: Number.EPSILON / 2,
+    });
+  }
   const target = Math.log(pressurePa);
   return solveBracketed((t) => Math.log(branch.pressure(t)) - target, branch.tMin, branch.tMax, {
     relTolerance: Number.EPSILON / 2,

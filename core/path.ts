@@ -171,7 +171,14 @@ function nudge(temperatureK: number, direction: 1 | -1): number {
   return temperatureK * (1 + direction * 1e-9);
 }
 
-/** Heat to take `massKg` from T1 to T2 at constant pressure, J (negative when removed). */
+/**
+ * Heat to take `massKg` from T1 to T2 at constant pressure, J (negative when removed).
+ *
+ * Enthalpy is a function of state, so this is m·(h_end − h_start) with each end taken in the phase
+ * {@link isobaricPath} gives it — the phase of the first (last) step, or, when an end lies exactly
+ * on a coexistence temperature, the phase on the far side of that change — which makes it equal
+ * to the sum of the path's steps while evaluating two enthalpies instead of one per step.
+ */
 export function pathEnergy(
   substance: SubstanceDefinition,
   massKg: number,
@@ -179,9 +186,48 @@ export function pathEnergy(
   t2: number,
   pressurePa: number,
 ): number {
-  let total = 0;
-  for (const step of isobaricPath(substance, massKg, t1, t2, pressurePa)) total += step.energyJ;
-  return total;
+  checkMass(massKg);
+  checkTemperature(t1, "start temperature");
+  checkTemperature(t2, "end temperature");
+  checkPressure(pressurePa);
+  const model = requireEnthalpy(substance);
+  if (t1 === t2) {
+    phaseAt(substance, t1, pressurePa);
+    return 0;
+  }
+  // The ends' own ranges are checked by endpointState's phase look-ups and by the enthalpy models.
+  const marks = marksOnIsobar(substance, pressurePa);
+  const start = endpointState(substance, marks, t1, t2, pressurePa);
+  const end = endpointState(substance, marks, t2, t1, pressurePa);
+  return (
+    massKg *
+    (model.enthalpy(sideOf(end), t2, pressurePa, solidOf(end)) -
+      model.enthalpy(sideOf(start), t1, pressurePa, solidOf(start)))
+  );
+}
+
+/**
+ * The phase a path end is taken in: on a phase-change temperature (not the critical one), the
+ * phase across the change from the rest of the path; otherwise the phase of the step that
+ * touches the end, found at the middle of that step.
+ */
+function endpointState(
+  substance: SubstanceDefinition,
+  marks: readonly Mark[],
+  endK: number,
+  otherEndK: number,
+  pressurePa: number,
+): PhaseState {
+  const towardOther = otherEndK > endK ? 1 : -1;
+  let nearest = otherEndK;
+  for (const mark of marks) {
+    if (mark.temperatureK === endK && mark.boundary !== "critical") {
+      return phaseAt(substance, nudge(endK, towardOther === 1 ? -1 : 1), pressurePa);
+    }
+    const ahead = (mark.temperatureK - endK) * towardOther;
+    if (ahead > 0 && ahead < (nearest - endK) * towardOther) nearest = mark.temperatureK;
+  }
+  return phaseAt(substance, (endK + nearest) / 2, pressurePa);
 }
 
 /** Where a path ends after a given heat: temperature, state and converted fraction. */

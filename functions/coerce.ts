@@ -3,6 +3,8 @@
  * a text or a flag, or a BadInputError that says what to change.
  */
 import { BadInputError } from "../core/errors";
+import { findSubstance } from "../core/substances/registry";
+import type { SubstanceDefinition } from "../core/substances/types";
 import { parseUnits, type UnitSystem, SI } from "../core/units/units";
 
 /** One cell as Excel hands it to a custom function. */
@@ -82,4 +84,21 @@ export function readUnits(value: unknown): UnitSystem {
     throw new BadInputError([`units is ${describe(cell)}: enter unit symbols as text, e.g. "C bar" or "F psig"`]);
   }
   return parseUnits(cell);
+}
+
+/**
+ * A substance reader for one call: remembers the last name it resolved, so a column of states of
+ * one substance looks the name up once instead of once per cell.
+ */
+export function substanceReader(): (cell: Cell) => SubstanceDefinition {
+  let lastText: string | undefined;
+  let last: SubstanceDefinition | undefined;
+  return (cell) => {
+    const text = readText(cell, "substance");
+    if (text !== lastText || !last) {
+      last = findSubstance(text);
+      lastText = text;
+    }
+    return last;
+  };
 }

@@ -16,7 +16,7 @@ import { endState, isobaricPath, latentHeat, parseTransition, pathEnergy, specif
 import { PROVENANCE_HEADER, provenanceFor } from "../core/sources/provenance";
 import { findSubstance, SUBSTANCES } from "../core/substances/registry";
 import { fromSI, toSI } from "../core/units/units";
-import { readFlag, readNumber, readOptionalText, readText, readUnits, singleCell } from "./coerce";
+import { readFlag, readNumber, readOptionalText, readText, readUnits, singleCell, substanceReader } from "./coerce";
 import { evaluate, table } from "./evaluate";
 import { toExcelError } from "./excel-error";
 
@@ -33,9 +33,10 @@ import { toExcelError } from "./excel-error";
  * @returns The phase name.
  */
 export function state(substance: any[][], temperature: any[][], pressure: any[][], units?: any, detail?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, temperature, pressure], ["substance", "temperature", "pressure"], units, (cells, system) => {
     const fine = readFlag(singleCell(detail ?? null, "detail"), "detail");
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
     const pressurePa = toSI(system, "pressure", readNumber(cells[2], "pressure"));
     const result = phaseAt(found, temperatureK, pressurePa);
@@ -53,8 +54,9 @@ export function state(substance: any[][], temperature: any[][], pressure: any[][
  * @returns Saturation or sublimation pressure.
  */
 export function satPressure(substance: any[][], temperature: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, temperature], ["substance", "temperature"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
     return fromSI(system, "pressure", saturationPressure(found, temperatureK));
   });
@@ -70,8 +72,9 @@ export function satPressure(substance: any[][], temperature: any[][], units?: an
  * @returns Boiling or sublimation temperature.
  */
 export function satTemp(substance: any[][], pressure: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, pressure], ["substance", "pressure"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const pressurePa = toSI(system, "pressure", readNumber(cells[1], "pressure"));
     return fromSI(system, "temperature", saturationTemperature(found, pressurePa));
   });
@@ -87,8 +90,9 @@ export function satTemp(substance: any[][], pressure: any[][], units?: any): any
  * @returns Melting temperature.
  */
 export function meltTemp(substance: any[][], pressure: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, pressure], ["substance", "pressure"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const pressurePa = toSI(system, "pressure", readNumber(cells[1], "pressure"));
     return fromSI(system, "temperature", meltingTemperature(found, pressurePa));
   });
@@ -105,8 +109,9 @@ export function meltTemp(substance: any[][], pressure: any[][], units?: any): an
  * @returns Melting pressure.
  */
 export function meltPressure(substance: any[][], temperature: any[][], units?: any, form?: any[][]): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, temperature, form], ["substance", "temperature", "form"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
     const solid = readOptionalText(cells[2], "form");
     return fromSI(system, "pressure", meltingPressure(found, temperatureK, solid === "" ? undefined : solid));
@@ -122,8 +127,9 @@ export function meltPressure(substance: any[][], temperature: any[][], units?: a
  * @returns The constant in the units given.
  */
 export function constant(substance: any[][], name: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, name], ["substance", "name"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const resolved = constantOf(found, readText(cells[1], "name"));
     return fromSI(system, resolved.entry.dimension, resolved.value, found.constants.molarMass?.value);
   });
@@ -180,8 +186,9 @@ export function substances(): any[][] {
  * @returns Temperature margin to the nearest boundary.
  */
 export function margin(substance: any[][], temperature: any[][], pressure: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, temperature, pressure], ["substance", "temperature", "pressure"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
     const pressurePa = toSI(system, "pressure", readNumber(cells[2], "pressure"));
     return fromSI(system, "temperatureDifference", marginToBoundary(found, temperatureK, pressurePa).marginK);
@@ -199,8 +206,9 @@ export function margin(substance: any[][], temperature: any[][], pressure: any[]
  * @returns Slope of the boundary.
  */
 export function slope(substance: any[][], boundary: any[][], temperature: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, boundary, temperature], ["substance", "boundary", "temperature"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const which = parseBoundary(readText(cells[1], "boundary"));
     const temperatureK = toSI(system, "temperature", readNumber(cells[2], "temperature"));
     return (boundarySlope(found, which, temperatureK) * system.temperature.scale) / system.pressure.scale;
@@ -264,8 +272,9 @@ export function crossings(substance: any, t1: any, p1: any, t2: any, p2: any, un
  * @returns Heat for the whole mass.
  */
 export function pathEnergyFn(substance: any[][], mass: any[][], t1: any[][], t2: any[][], pressure: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, mass, t1, t2, pressure], ["substance", "mass", "T1", "T2", "pressure"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const molarMass = found.constants.molarMass?.value;
     const massKg = toSI(system, "mass", readNumber(cells[1], "mass"), molarMass);
     const startK = toSI(system, "temperature", readNumber(cells[2], "T1"));
@@ -361,8 +370,9 @@ export function endStateFn(substance: any, mass: any, t1: any, heat: any, pressu
  * @returns Specific enthalpy (default J/kg).
  */
 export function enthalpy(substance: any[][], temperature: any[][], pressure: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, temperature, pressure], ["substance", "temperature", "pressure"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const temperatureK = toSI(system, "temperature", readNumber(cells[1], "temperature"));
     const pressurePa = toSI(system, "pressure", readNumber(cells[2], "pressure"));
     return fromSI(system, "specificEnergy", specificEnthalpy(found, temperatureK, pressurePa), found.constants.molarMass?.value);
@@ -380,8 +390,9 @@ export function enthalpy(substance: any[][], temperature: any[][], pressure: any
  * @returns Specific latent heat (default J/kg).
  */
 export function latentHeatFn(substance: any[][], transition: any[][], temperature: any[][], units?: any): any[][] {
+  const readSubstance = substanceReader();
   return evaluate([substance, transition, temperature], ["substance", "transition", "temperature"], units, (cells, system) => {
-    const found = findSubstance(readText(cells[0], "substance"));
+    const found = readSubstance(cells[0]);
     const which = parseTransition(readText(cells[1], "transition"));
     const temperatureK = toSI(system, "temperature", readNumber(cells[2], "temperature"));
     return fromSI(system, "specificEnergy", latentHeat(found, which, temperatureK), found.constants.molarMass?.value);

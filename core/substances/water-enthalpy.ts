@@ -6,8 +6,8 @@
  */
 import { NoSuchStateError, OutOfRangeError, q } from "../errors";
 import { b23Pressure } from "../models/iapws-if97/b23";
-import { region1 } from "../models/iapws-if97/region1";
-import { region2 } from "../models/iapws-if97/region2";
+import { region1Enthalpy } from "../models/iapws-if97/region1";
+import { region2Enthalpy } from "../models/iapws-if97/region2";
 import { region3OnSide } from "../models/iapws-if97/region3";
 import { region5 } from "../models/iapws-if97/region5";
 import {
@@ -111,9 +111,9 @@ function liquidEnthalpy(temperatureK: number, pressurePa: number): number {
     if (temperatureK < ICE_IH.tMin) {
       throw outOfIF97(temperatureK, pressurePa, "liquid below 251.165 K is not stable at any pressure");
     }
-    return region1(temperatureK, pressurePa).enthalpy;
+    return region1Enthalpy(temperatureK, pressurePa);
   }
-  if (temperatureK <= IF97_T_REGION_1_3) return region1(temperatureK, pressurePa).enthalpy;
+  if (temperatureK <= IF97_T_REGION_1_3) return region1Enthalpy(temperatureK, pressurePa);
   if (temperatureK < CRITICAL_T) return region3OnSide(temperatureK, pressurePa, "liquid").enthalpy;
   return supercriticalEnthalpy(temperatureK, pressurePa);
 }
@@ -127,11 +127,11 @@ function vaporEnthalpy(temperatureK: number, pressurePa: number): number {
         "vapour is covered down to 200 K, where IF97 region 2 still agrees with IAPWS-95 within 0.7 kJ/kg",
       );
     }
-    return region2(temperatureK, pressurePa).enthalpy;
+    return region2Enthalpy(temperatureK, pressurePa);
   }
   if (temperatureK <= IF97_T_REGION_1_3) {
     if (pressurePa > IF97_P_MAX) throw outOfIF97(temperatureK, pressurePa, "up to 100 MPa");
-    return region2(temperatureK, pressurePa).enthalpy;
+    return region2Enthalpy(temperatureK, pressurePa);
   }
   if (temperatureK < CRITICAL_T && pressurePa > b23Pressure(temperatureK)) {
     return region3OnSide(temperatureK, pressurePa, "vapor").enthalpy;
@@ -148,7 +148,7 @@ function supercriticalEnthalpy(temperatureK: number, pressurePa: number): number
   }
   if (pressurePa > IF97_P_MAX) throw outOfIF97(temperatureK, pressurePa, "up to 100 MPa");
   if (temperatureK > IF97_T_REGION_3_MAX || pressurePa <= b23Pressure(temperatureK)) {
-    return region2(temperatureK, pressurePa).enthalpy;
+    return region2Enthalpy(temperatureK, pressurePa);
   }
   return region3OnSide(temperatureK, pressurePa, "vapor").enthalpy;
 }

@@ -133,3 +133,28 @@ export function region1(temperatureK: number, pressurePa: number): FluidProperti
     speedOfSound,
   };
 }
+
+/**
+ * Specific enthalpy alone, J/kg, in IF97 region 1: h = R·T·tau·gamma_tau (release Table 3), the
+ * same sum as {@link region1} but without the other derivatives, for the path-energy hot path.
+ * The powers of (7.1 − pi) are carried forward, as I_i never decreases along Table 2.
+ */
+export function region1Enthalpy(temperatureK: number, pressurePa: number): number {
+  const pi = pressurePa / pStar;
+  const tau = tStar / temperatureK;
+  const a = 7.1 - pi;
+  const b = tau - 1.222;
+  let aPower = 1;
+  let aExponent = 0;
+  let sJ = 0;
+  for (let i = 1; i <= 34; i++) {
+    const Ii = I[i]!;
+    if (Ii !== aExponent) {
+      aPower *= integerPower(a, Ii - aExponent);
+      aExponent = Ii;
+    }
+    const Ji = J[i]!;
+    sJ += Ji * n[i]! * aPower * integerPower(b, Ji);
+  }
+  return R * temperatureK * tau * (sJ / b);
+}

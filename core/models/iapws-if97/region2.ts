@@ -176,3 +176,33 @@ export function region2(temperatureK: number, pressurePa: number): FluidProperti
     speedOfSound,
   };
 }
+
+/**
+ * Specific enthalpy alone, J/kg, in IF97 region 2: h = R·T·tau·(gamma0_tau + gammaR_tau)
+ * (release Table 12), the same sums as {@link region2} without the other derivatives, for the
+ * path-energy hot path. The powers of pi are carried forward, as I_i never decreases along
+ * Table 11.
+ */
+export function region2Enthalpy(temperatureK: number, pressurePa: number): number {
+  const pi = pressurePa / pStar;
+  const tau = tStar / temperatureK;
+  let tauGamma0Tau = 0;
+  for (let i = 1; i <= 9; i++) {
+    const Ji = J0[i]!;
+    tauGamma0Tau += Ji * n0[i]! * integerPower(tau, Ji);
+  }
+  const b = tau - 0.5;
+  let piPower = 1;
+  let piExponent = 0;
+  let sJ = 0;
+  for (let i = 1; i <= 43; i++) {
+    const Ii = I[i]!;
+    if (Ii !== piExponent) {
+      piPower *= integerPower(pi, Ii - piExponent);
+      piExponent = Ii;
+    }
+    const Ji = J[i]!;
+    sJ += Ji * n[i]! * piPower * integerPower(b, Ji);
+  }
+  return R * temperatureK * (tauGamma0Tau + (tau * sJ) / b);
+}
