@@ -22,13 +22,14 @@ describe("enthalpy-only evaluations equal the full region equations", () => {
     expectClose(region2Enthalpy(temperatureK, pressurePa), hKJ * 1e3, { rel: 5e-9 });
   });
 
+  // The powers are formed in another order, so the sums agree to a few parts in 1e13.
   it("agree with the full evaluations to rounding over the regions", () => {
     for (let temperatureK = 273.15; temperatureK <= 623.15; temperatureK += 17.5) {
       for (const pressurePa of [1e6, 2e7, 1e8]) {
-        expectClose(region1Enthalpy(temperatureK, pressurePa), region1(temperatureK, pressurePa).enthalpy, { rel: 1e-13, abs: 1e-9 });
+        expectClose(region1Enthalpy(temperatureK, pressurePa), region1(temperatureK, pressurePa).enthalpy, { rel: 1e-12, abs: 1e-9 });
       }
       for (const pressurePa of [10, 1e3, 1e5]) {
-        expectClose(region2Enthalpy(temperatureK + 400, pressurePa), region2(temperatureK + 400, pressurePa).enthalpy, { rel: 1e-13 });
+        expectClose(region2Enthalpy(temperatureK + 400, pressurePa), region2(temperatureK + 400, pressurePa).enthalpy, { rel: 1e-12 });
       }
     }
   });
