@@ -63,6 +63,22 @@ export function provenanceRows(substance: SubstanceDefinition): ProvenanceRow[] 
   ];
   if (substance.curves.sublimation) rows.push(branchRow(substance.curves.sublimation));
   for (const branch of substance.curves.melting) rows.push(branchRow(branch));
+  for (const model of substance.enthalpy?.models ?? []) {
+    rows.push(
+      modelRow("enthalpy", model, ["enthalpy", "path", "pathenergy", "endstate", "latentheat", "latent heat", "energy", model.id]),
+    );
+  }
+  if (substance.enthalpy) {
+    rows.push({
+      quantity: "reference state",
+      model: substance.referenceState,
+      grade: substance.grade,
+      source: "",
+      validity: "",
+      uncertainty: "path energies and latent heats do not depend on it",
+      keys: ["reference state", "reference", "enthalpy", "path", "pathenergy"],
+    });
+  }
   for (const constant of constantsOf(substance)) {
     const cited = citation(constant.source);
     rows.push({
@@ -89,7 +105,7 @@ export function provenanceFor(substance: SubstanceDefinition, quantity: string):
   const folded = foldName(quantity);
   const matching = rows.filter((row) => row.keys.some((key) => foldName(key) === folded));
   if (matching.length > 0) return matching;
-  const words = ["state", "boiling", "sublimation", "melting", ...substance.curves.melting.map((b) => b.solid ?? "solid"), "constants", ...CONSTANT_CATALOG.map((c) => c.symbol)];
+  const words = ["state", "boiling", "sublimation", "melting", "enthalpy", ...substance.curves.melting.map((b) => b.solid ?? "solid"), "constants", ...CONSTANT_CATALOG.map((c) => c.symbol)];
   throw new BadInputError([
     `no source entry for "${quantity.trim()}" on ${substance.name}; use one of: ${[...new Set(words)].join(", ")} ` +
       "(or leave it empty for all)",
