@@ -153,7 +153,8 @@ export interface Crossing {
 /** Samples along a path; a boundary crossed twice between two samples would be missed. */
 const PATH_SAMPLES = 4096;
 
-function changeName(from: PhaseState, to: PhaseState): string {
+/** What a change from one phase to another is called: melt, freeze, boil, condense, sublime, deposit, … */
+export function changeName(from: PhaseState, to: PhaseState): string {
   const a = from.phase;
   const b = to.phase;
   if (a === "solid" && b === "solid") return `solid form changes (${from.detail} to ${to.detail}; approximate boundary)`;

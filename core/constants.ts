@@ -27,6 +27,9 @@ export const CONSTANT_CATALOG: readonly ConstantEntry[] = [
   { key: "normalBoilingPoint", symbol: "Tb", label: "normal boiling point (101.325 kPa)", names: ["normal boiling point", "boiling point", "NBP"], dimension: "temperature" },
   { key: "normalMeltingPoint", symbol: "Tm", label: "normal melting point (101.325 kPa)", names: ["normal melting point", "melting point", "freezing point"], dimension: "temperature" },
   { key: "molarMass", symbol: "M", label: "molar mass", names: ["molar mass", "molecular weight", "MW"], dimension: "molarMass" },
+  { key: "acentricFactor", symbol: "omega", label: "acentric factor", names: ["acentric factor", "ω", "w"], dimension: "dimensionless" },
+  { key: "enthalpyOfFusion", symbol: "Hfus", label: "enthalpy of fusion (at the triple point)", names: ["enthalpy of fusion", "heat of fusion", "latent heat of fusion", "ΔHfus", "dHfus"], dimension: "specificEnergy" },
+  { key: "enthalpyOfVaporization", symbol: "Hvap", label: "enthalpy of vaporization at Tb", names: ["enthalpy of vaporization", "heat of vaporization", "latent heat of vaporization", "ΔHvap", "dHvap"], dimension: "specificEnergy" },
 ];
 
 /** A constant of a substance with its catalogue entry. */

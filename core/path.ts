@@ -4,11 +4,11 @@
  * substance's enthalpy model; energies follow from enthalpy differences, so the steps of a path
  * always add up to the difference of its end states.
  *
- * Endpoint convention: a path that starts or ends exactly on a coexistence temperature includes
- * the whole phase change there (ice at its melting point is taken as all ice when heated, all
- * liquid when cooled to it from above).
+ * Endpoint convention: a state exactly on a phase-change temperature is taken as the warmer phase
+ * (liquid at the melting point, vapour at the boiling or sublimation point), whichever way the
+ * path runs, so paths split there add up and reversed paths change sign exactly.
  */
-import { boundariesOnIsobar, parseBoundary } from "./boundaries";
+import { boundariesOnIsobar, changeName, parseBoundary } from "./boundaries";
 import { atLeast, atMost } from "./curves";
 import { BadInputError, NoSuchStateError, OutOfRangeError, q } from "./errors";
 import { solveBracketed } from "./numerics/roots";
@@ -65,40 +65,170 @@ function phaseWord(state: PhaseState): string {
   return state.phase === "solid" ? solidOf(state) : state.phase;
 }
 
+function sensibleAction(heating: boolean, state: PhaseState, aboveCriticalPressure: boolean, fromCritical: boolean): string {
+  const verb = heating ? "heat" : "cool";
+  if (aboveCriticalPressure && fromCritical && (state.phase === "supercritical fluid" || state.phase === "liquid")) {
+    return `${verb} ${state.phase} (passes the critical temperature above the critical pressure: no latent heat)`;
+  }
+  return `${verb} ${phaseWord(state)}`;
+}
+
 /** A temperature where the path changes phase or crosses the critical temperature. */
 interface Mark {
   readonly temperatureK: number;
   readonly boundary: Boundary | "critical";
 }
 
+/**
+ * Marks closer than this (relative) are one: at the triple-point pressure the melting and the
+ * boiling temperatures coincide up to the rounding of their equations (2.4e-10 K apart for water).
+ */
+const MERGE_TOLERANCE = 1e-11;
+/** How far, relative, a phase is read beside a mark when no neighbouring mark is nearer. */
+const SIDE_OFFSET = 1e-6;
+
 function marksOnIsobar(substance: SubstanceDefinition, pressurePa: number): Mark[] {
-  const marks: Mark[] = boundariesOnIsobar(substance, pressurePa).map((b) => ({
+  const raw: Mark[] = boundariesOnIsobar(substance, pressurePa).map((b) => ({
     temperatureK: b.temperatureK,
     boundary: b.boundary,
   }));
-  marks.push({ temperatureK: criticalPoint(substance).temperatureK, boundary: "critical" });
-  return marks.sort((a, b) => a.temperatureK - b.temperatureK);
+  raw.push({ temperatureK: criticalPoint(substance).temperatureK, boundary: "critical" });
+  raw.sort((a, b) => a.temperatureK - b.temperatureK);
+  const marks: Mark[] = [];
+  for (const mark of raw) {
+    const last = marks[marks.length - 1];
+    if (last && mark.temperatureK - last.temperatureK <= MERGE_TOLERANCE * last.temperatureK) {
+      if (last.boundary === "critical") marks[marks.length - 1] = { temperatureK: last.temperatureK, boundary: mark.boundary };
+      continue;
+    }
+    marks.push(mark);
+  }
+  return marks;
 }
 
-const LATENT_WORDS: Record<Boundary, readonly [heating: string, cooling: string]> = {
-  melting: ["melt", "freeze"],
-  boiling: ["boil", "condense"],
-  sublimation: ["sublime", "deposit"],
-};
+/** A sensible step (inside one phase) or a phase change, in the order the path meets them. */
+type PlanItem =
+  | { readonly kind: "sensible"; readonly fromK: number; readonly toK: number; readonly state: PhaseState }
+  | { readonly kind: "latent"; readonly atK: number; readonly before: PhaseState; readonly after: PhaseState };
 
-function sensibleAction(heating: boolean, state: PhaseState, aboveCriticalPressure: boolean, fromCritical: boolean): string {
-  const verb = heating ? "heat" : "cool";
-  if (state.phase === "supercritical fluid" && fromCritical && heating) {
-    return `${verb} supercritical fluid (passes the critical temperature above the critical pressure: no latent heat)`;
-  }
-  if (state.phase === "liquid" && aboveCriticalPressure && fromCritical && !heating) {
-    return `${verb} liquid (passes the critical temperature above the critical pressure: no latent heat)`;
-  }
-  return `${verb} ${phaseWord(state)}`;
+/** A path laid out before any enthalpy is evaluated. */
+interface Plan {
+  readonly items: readonly PlanItem[];
+  readonly start: PhaseState;
+  readonly end: PhaseState;
 }
 
 /**
- * The steps of heating or cooling `massKg` from T1 to T2 at constant pressure p.
+ * Lays out the isobar from T1 to T2: sensible stretches between the phase-change temperatures,
+ * and a change at each of them, each phase read at the middle of its stretch.
+ *
+ * A state exactly on a phase-change temperature is taken as the warmer phase (liquid at the
+ * melting point, vapour at the boiling or sublimation point) whichever way the path runs, so a
+ * path ending there includes the change when heating and a path starting there includes it when
+ * cooling. That keeps both laws exact: A→B + B→C = A→C and B→A = −(A→B).
+ *
+ * Each stretch is checked against the temperature range its phase's enthalpy model covers, so
+ * the path and its total are refused alike where a model stops.
+ */
+function planPath(
+  substance: SubstanceDefinition,
+  model: EnthalpyModel,
+  t1: number,
+  t2: number,
+  pressurePa: number,
+): Plan {
+  const marks = marksOnIsobar(substance, pressurePa).map((mark) => {
+    // An end within the merge tolerance of a mark is on it: the mark moves to the end exactly.
+    for (const end of [t1, t2]) {
+      if (Math.abs(end - mark.temperatureK) <= MERGE_TOLERANCE * mark.temperatureK) return { ...mark, temperatureK: end };
+    }
+    return mark;
+  });
+  const warmSide = (index: number): PhaseState => {
+    const mark = marks[index]!;
+    const next = marks[index + 1];
+    const beside = mark.temperatureK * (1 + SIDE_OFFSET);
+    return phaseAt(substance, next ? Math.min(beside, (mark.temperatureK + next.temperatureK) / 2) : beside, pressurePa);
+  };
+  const low = Math.min(t1, t2);
+  const high = Math.max(t1, t2);
+  const heating = t2 > t1;
+  const crossed = marks
+    .map((mark, index) => ({ mark, index }))
+    .filter(({ mark }) => mark.temperatureK > low && mark.temperatureK <= high);
+  if (!heating) crossed.reverse();
+
+  const items: PlanItem[] = [];
+  let from = t1;
+  let previous: PhaseState | undefined;
+  const stretch = (to: number): PhaseState | undefined => {
+    if (to === from) return undefined;
+    const state = phaseAt(substance, (from + to) / 2, pressurePa);
+    checkStretch(substance, model, state, Math.min(from, to), Math.max(from, to), pressurePa);
+    items.push({ kind: "sensible", fromK: from, toK: to, state });
+    return state;
+  };
+  for (const { mark, index } of crossed) {
+    const before = stretch(mark.temperatureK) ?? previous ?? warmSide(index);
+    from = mark.temperatureK;
+    const after =
+      mark.temperatureK === t2 ? warmSide(index) : phaseAt(substance, (mark.temperatureK + nextStop(crossed, mark, t2)) / 2, pressurePa);
+    if (phaseWord(before) !== phaseWord(after) && mark.boundary !== "critical") {
+      items.push({ kind: "latent", atK: mark.temperatureK, before, after });
+    }
+    previous = after;
+  }
+  const last = stretch(t2) ?? previous ?? phaseAt(substance, t2, pressurePa);
+  const first = items[0];
+  const start = first ? (first.kind === "sensible" ? first.state : first.before) : last;
+  return { items, start, end: last };
+}
+
+/** The temperature after `mark` where the path next stops: the following crossed mark or T2. */
+function nextStop(crossed: readonly { mark: Mark }[], mark: Mark, t2: number): number {
+  const position = crossed.findIndex((entry) => entry.mark === mark);
+  return crossed[position + 1]?.mark.temperatureK ?? t2;
+}
+
+function checkStretch(
+  substance: SubstanceDefinition,
+  model: EnthalpyModel,
+  state: PhaseState,
+  lowK: number,
+  highK: number,
+  pressurePa: number,
+): void {
+  const [lo, hi] = model.temperatureLimits(pressurePa, sideOf(state));
+  if (atLeast(lowK, lo) && atMost(highK, hi)) return;
+  throw new OutOfRangeError([
+    `the path runs through ${phaseWord(state)} ${substance.name} from `,
+    q.T(lowK),
+    " to ",
+    q.T(highK),
+    ", beyond the range its enthalpy model covers on this isobar (",
+    q.T(lo),
+    " to ",
+    q.T(hi),
+    "; PHASE.SOURCE lists the models)",
+  ]);
+}
+
+function latentOf(model: EnthalpyModel, item: { atK: number; before: PhaseState; after: PhaseState }, pressurePa: number): number {
+  return (
+    model.enthalpy(sideOf(item.after), item.atK, pressurePa, solidOf(item.after)) -
+    model.enthalpy(sideOf(item.before), item.atK, pressurePa, solidOf(item.before))
+  );
+}
+
+function checkPathInputs(massKg: number, t1: number, t2: number, pressurePa: number): void {
+  checkMass(massKg);
+  checkTemperature(t1, "start temperature");
+  checkTemperature(t2, "end temperature");
+  checkPressure(pressurePa);
+}
+
+/**
+ * The steps of heating or cooling `massKg` from T1 to T2 at constant pressure.
  * @throws BadInputError, OutOfRangeError or NoSuchStateError as the inputs and models require.
  */
 export function isobaricPath(
@@ -108,76 +238,47 @@ export function isobaricPath(
   t2: number,
   pressurePa: number,
 ): PathStep[] {
-  checkMass(massKg);
-  checkTemperature(t1, "start temperature");
-  checkTemperature(t2, "end temperature");
-  checkPressure(pressurePa);
+  checkPathInputs(massKg, t1, t2, pressurePa);
   const model = requireEnthalpy(substance);
   phaseAt(substance, t1, pressurePa);
   phaseAt(substance, t2, pressurePa);
   if (t1 === t2) return [];
   const heating = t2 > t1;
-  const low = Math.min(t1, t2);
-  const high = Math.max(t1, t2);
   const aboveCriticalPressure = pressurePa >= criticalPoint(substance).pressurePa;
-  const inside = marksOnIsobar(substance, pressurePa).filter((m) => m.temperatureK >= low && m.temperatureK <= high);
-  const ordered = heating ? inside : inside.reverse();
-
-  const steps: PathStep[] = [];
-  let from = t1;
-  let fromCritical = false;
-  const sensible = (to: number): void => {
-    if (to === from) return;
-    const state = phaseAt(substance, (from + to) / 2, pressurePa);
-    const side = sideOf(state);
-    const solid = solidOf(state);
-    const energy =
-      massKg * (model.enthalpy(side, to, pressurePa, solid) - model.enthalpy(side, from, pressurePa, solid));
-    steps.push({
-      action: sensibleAction(heating, state, aboveCriticalPressure, fromCritical),
+  const plan = planPath(substance, model, t1, t2, pressurePa);
+  const critical = criticalPoint(substance).temperatureK;
+  return plan.items.map((item): PathStep => {
+    if (item.kind === "latent") {
+      return {
+        action: changeName(item.before, item.after),
+        kind: "latent",
+        fromK: item.atK,
+        toK: item.atK,
+        energyJ: massKg * latentOf(model, item, pressurePa),
+        phase: mixture(item.before, item.after, heating),
+      };
+    }
+    const side = sideOf(item.state);
+    const solid = solidOf(item.state);
+    return {
+      action: sensibleAction(heating, item.state, aboveCriticalPressure, item.fromK === critical),
       kind: "sensible",
-      fromK: from,
-      toK: to,
-      energyJ: energy,
-      phase: phaseWord(state),
-    });
-  };
-  for (const mark of ordered) {
-    sensible(mark.temperatureK);
-    from = mark.temperatureK;
-    fromCritical = mark.boundary === "critical";
-    if (mark.boundary === "critical") continue;
-    const below = phaseAt(substance, nudge(mark.temperatureK, -1), pressurePa);
-    const above = phaseAt(substance, nudge(mark.temperatureK, +1), pressurePa);
-    const latent =
-      model.enthalpy(sideOf(above), mark.temperatureK, pressurePa, solidOf(above)) -
-      model.enthalpy(sideOf(below), mark.temperatureK, pressurePa, solidOf(below));
-    const [heatWord, coolWord] = LATENT_WORDS[mark.boundary];
-    steps.push({
-      action: heating ? heatWord : coolWord,
-      kind: "latent",
-      fromK: mark.temperatureK,
-      toK: mark.temperatureK,
-      energyJ: (heating ? 1 : -1) * massKg * latent,
-      phase: heating ? `${phaseWord(below)} + ${phaseWord(above)}` : `${phaseWord(above)} + ${phaseWord(below)}`,
-    });
-  }
-  sensible(t2);
-  return steps;
-}
-
-/** A temperature a relative 1e-9 to one side of T: off a coexistence curve, inside one phase. */
-function nudge(temperatureK: number, direction: 1 | -1): number {
-  return temperatureK * (1 + direction * 1e-9);
+      fromK: item.fromK,
+      toK: item.toK,
+      energyJ:
+        massKg * (model.enthalpy(side, item.toK, pressurePa, solid) - model.enthalpy(side, item.fromK, pressurePa, solid)),
+      phase: phaseWord(item.state),
+    };
+  });
 }
 
 /**
  * Heat to take `massKg` from T1 to T2 at constant pressure, J (negative when removed).
  *
- * Enthalpy is a function of state, so this is m·(h_end − h_start) with each end taken in the phase
- * {@link isobaricPath} gives it — the phase of the first (last) step, or, when an end lies exactly
- * on a coexistence temperature, the phase on the far side of that change — which makes it equal
- * to the sum of the path's steps while evaluating two enthalpies instead of one per step.
+ * Enthalpy is a function of state, so this is m·(h_end − h_start) with each end in the phase
+ * {@link isobaricPath} gives it, which makes it equal to the sum of the path's steps while
+ * evaluating two enthalpies instead of one per step. The same checks refuse it where the path is
+ * refused.
  */
 export function pathEnergy(
   substance: SubstanceDefinition,
@@ -186,48 +287,18 @@ export function pathEnergy(
   t2: number,
   pressurePa: number,
 ): number {
-  checkMass(massKg);
-  checkTemperature(t1, "start temperature");
-  checkTemperature(t2, "end temperature");
-  checkPressure(pressurePa);
+  checkPathInputs(massKg, t1, t2, pressurePa);
   const model = requireEnthalpy(substance);
   if (t1 === t2) {
     phaseAt(substance, t1, pressurePa);
     return 0;
   }
-  // The ends' own ranges are checked by endpointState's phase look-ups and by the enthalpy models.
-  const marks = marksOnIsobar(substance, pressurePa);
-  const start = endpointState(substance, marks, t1, t2, pressurePa);
-  const end = endpointState(substance, marks, t2, t1, pressurePa);
+  const plan = planPath(substance, model, t1, t2, pressurePa);
   return (
     massKg *
-    (model.enthalpy(sideOf(end), t2, pressurePa, solidOf(end)) -
-      model.enthalpy(sideOf(start), t1, pressurePa, solidOf(start)))
+    (model.enthalpy(sideOf(plan.end), t2, pressurePa, solidOf(plan.end)) -
+      model.enthalpy(sideOf(plan.start), t1, pressurePa, solidOf(plan.start)))
   );
-}
-
-/**
- * The phase a path end is taken in: on a phase-change temperature (not the critical one), the
- * phase across the change from the rest of the path; otherwise the phase of the step that
- * touches the end, found at the middle of that step.
- */
-function endpointState(
-  substance: SubstanceDefinition,
-  marks: readonly Mark[],
-  endK: number,
-  otherEndK: number,
-  pressurePa: number,
-): PhaseState {
-  const towardOther = otherEndK > endK ? 1 : -1;
-  let nearest = otherEndK;
-  for (const mark of marks) {
-    if (mark.temperatureK === endK && mark.boundary !== "critical") {
-      return phaseAt(substance, nudge(endK, towardOther === 1 ? -1 : 1), pressurePa);
-    }
-    const ahead = (mark.temperatureK - endK) * towardOther;
-    if (ahead > 0 && ahead < (nearest - endK) * towardOther) nearest = mark.temperatureK;
-  }
-  return phaseAt(substance, (endK + nearest) / 2, pressurePa);
 }
 
 /** Where a path ends after a given heat: temperature, state and converted fraction. */
@@ -241,7 +312,7 @@ export interface EndState {
 
 /**
  * The state reached from T1 after adding `heatJ` (removing, if negative) to `massKg` at constant
- * pressure: the inverse of {@link pathEnergy}.
+ * pressure: the inverse of {@link pathEnergy}. It walks the same plan, as far as the heat goes.
  */
 export function endState(
   substance: SubstanceDefinition,
@@ -260,53 +331,58 @@ export function endState(
   const heating = heatJ > 0;
   const [lowLimit, highLimit] = model.temperatureLimits(pressurePa);
   const limit = heating ? highLimit : lowLimit;
-  const marks = marksOnIsobar(substance, pressurePa).filter((m) =>
-    heating ? m.temperatureK >= t1 && m.temperatureK < limit : m.temperatureK <= t1 && m.temperatureK > limit,
-  );
-  if (!heating) marks.reverse();
+  if (heating ? t1 >= limit : t1 <= limit) throw beyondModels(substance, heating, limit);
+  // Lay the path out to the far limit, but check each stretch only as far as the heat reaches.
+  const plan = planPath(substance, unlimited(model), t1, limit, pressurePa);
   let remaining = Math.abs(heatJ) / massKg;
-  let from = t1;
-  const throughSegment = (to: number): number | undefined => {
-    if (to === from) return undefined;
-    const state = phaseAt(substance, (from + to) / 2, pressurePa);
-    const side = sideOf(state);
-    const solid = solidOf(state);
-    const hFrom = model.enthalpy(side, from, pressurePa, solid);
-    const span = Math.abs(model.enthalpy(side, to, pressurePa, solid) - hFrom);
-    if (remaining > span) {
-      remaining -= span;
-      return undefined;
+  for (const item of plan.items) {
+    if (item.kind === "latent") {
+      const latent = Math.abs(latentOf(model, item, pressurePa));
+      if (remaining < latent) {
+        return {
+          temperatureK: item.atK,
+          state: mixture(item.before, item.after, heating),
+          convertedFraction: remaining / latent,
+        };
+      }
+      remaining -= latent;
+      continue;
     }
-    const target = hFrom + (heating ? remaining : -remaining);
-    return solveBracketed((t) => model.enthalpy(side, t, pressurePa, solid) - target, from, to, {
-      relTolerance: Number.EPSILON,
-    });
-  };
-  for (const mark of marks) {
-    const stop = throughSegment(mark.temperatureK);
-    if (stop !== undefined) return { temperatureK: stop, state: phaseWord(phaseAt(substance, stop, pressurePa)) };
-    from = mark.temperatureK;
-    if (mark.boundary === "critical") continue;
-    const below = phaseAt(substance, nudge(mark.temperatureK, -1), pressurePa);
-    const above = phaseAt(substance, nudge(mark.temperatureK, +1), pressurePa);
-    const latent =
-      model.enthalpy(sideOf(above), mark.temperatureK, pressurePa, solidOf(above)) -
-      model.enthalpy(sideOf(below), mark.temperatureK, pressurePa, solidOf(below));
-    if (remaining < latent) {
-      return {
-        temperatureK: mark.temperatureK,
-        state: `${phaseWord(below)} + ${phaseWord(above)}`,
-        convertedFraction: remaining / latent,
-      };
+    const side = sideOf(item.state);
+    const solid = solidOf(item.state);
+    const [lo, hi] = model.temperatureLimits(pressurePa, side);
+    const reach = heating ? Math.min(item.toK, hi) : Math.max(item.toK, lo);
+    const hFrom = model.enthalpy(side, item.fromK, pressurePa, solid);
+    const span = Math.abs(model.enthalpy(side, reach, pressurePa, solid) - hFrom);
+    if (remaining <= span) {
+      const target = hFrom + (heating ? remaining : -remaining);
+      const temperatureK = solveBracketed((t) => model.enthalpy(side, t, pressurePa, solid) - target, item.fromK, reach, {
+        relTolerance: Number.EPSILON,
+      });
+      return { temperatureK, state: phaseWord(item.state) };
     }
-    remaining -= latent;
+    if (reach !== item.toK) throw beyondModels(substance, heating, reach);
+    remaining -= span;
   }
-  const stop = throughSegment(limit);
-  if (stop !== undefined) return { temperatureK: stop, state: phaseWord(phaseAt(substance, stop, pressurePa)) };
-  throw new OutOfRangeError([
+  throw beyondModels(substance, heating, limit);
+}
+
+/** Two phases in coexistence, the colder one first ("ice Ih + liquid", "liquid + vapor"). */
+function mixture(before: PhaseState, after: PhaseState, heating: boolean): string {
+  const [cold, warm] = heating ? [before, after] : [after, before];
+  return `${phaseWord(cold)} + ${phaseWord(warm)}`;
+}
+
+/** The same model without per-phase range checks, for laying out a path before walking it. */
+function unlimited(model: EnthalpyModel): EnthalpyModel {
+  return { ...model, temperatureLimits: () => [0, Number.POSITIVE_INFINITY] };
+}
+
+function beyondModels(substance: SubstanceDefinition, heating: boolean, limitK: number): OutOfRangeError {
+  return new OutOfRangeError([
     `that much heat ${heating ? "added" : "removed"} takes ${substance.name} ${heating ? "above" : "below"} `,
-    q.T(limit),
-    ", the limit of its enthalpy models on this isobar",
+    q.T(limitK),
+    ", where its enthalpy models stop on this isobar (PHASE.SOURCE lists them)",
   ]);
 }
 
@@ -335,7 +411,12 @@ export type Transition = "fusion" | "vaporization" | "sublimation";
 
 /** Reads fusion, vaporization or sublimation (and the boundary names). */
 export function parseTransition(name: string): Transition {
-  const boundary = parseBoundary(name);
+  let boundary: Boundary;
+  try {
+    boundary = parseBoundary(name);
+  } catch {
+    throw new BadInputError([`unknown transition "${name.trim()}": use fusion, vaporization or sublimation`]);
+  }
   return boundary === "melting" ? "fusion" : boundary === "boiling" ? "vaporization" : "sublimation";
 }
 

@@ -17,7 +17,7 @@ import {
 import { NoSuchStateError, OutOfRangeError, BadInputError, q } from "./errors";
 import { foldName } from "./names";
 import { citation } from "./sources/bibliography";
-import type { CurveBranch, SubstanceDefinition } from "./substances/types";
+import type { CurveBranch, MeltingBound, SubstanceDefinition } from "./substances/types";
 import { checkPressure, checkTemperature, checkTemperatureCoverage } from "./validate";
 
 /** Phase words of the design. */
@@ -109,6 +109,63 @@ function meltingPressureCeiling(substance: SubstanceDefinition): number {
   return Math.max(...substance.curves.melting.map((branch) => branchPressureRange(branch)[1]));
 }
 
+/**
+ * The error for a melting temperature or pressure asked of a substance without a published
+ * melting curve: the triple point is the only known point of its melting line.
+ */
+function noMeltingCurve(substance: SubstanceDefinition): NoSuchStateError {
+  const triple = triplePoint(substance);
+  return new NoSuchStateError([
+    `no melting curve is published for ${substance.name} in Phasecell's sources: the only known ` +
+      "point of its melting line is the triple point (",
+    q.T(triple.temperatureK),
+    ", ",
+    q.p(triple.pressurePa),
+    "); at higher pressures it melts at a somewhat higher temperature that Phasecell cannot give " +
+      "(PHASE.SOURCE with \"state\" explains the bound it uses)",
+  ]);
+}
+
+/**
+ * The bound that stands in for an unpublished melting line (see MeltingBound).
+ * @throws Error when a substance without melting curves lacks it (a definition fault).
+ */
+function meltingBoundOf(substance: SubstanceDefinition): MeltingBound {
+  if (!substance.meltingBound) throw new Error(`${substance.id} has no melting curve and no melting bound`);
+  return substance.meltingBound;
+}
+
+/**
+ * The phase at a pressure at or above the triple-point pressure of a substance without a
+ * published melting curve. Its melting temperature rises with pressure from the triple point
+ * no faster than the bound, so colder than the triple point is solid, warmer than the bound's
+ * line is fluid, and between the two the phase is not decided.
+ */
+function phaseWithoutMeltingCurve(substance: SubstanceDefinition, temperatureK: number, pressurePa: number): PhaseState {
+  const bound = meltingBoundOf(substance);
+  if (temperatureK === bound.anchorK && pressurePa === bound.anchorPa) {
+    return { phase: "solid + liquid", detail: "solid + liquid" };
+  }
+  if (temperatureK <= bound.anchorK) return { phase: "solid", detail: "solid" };
+  const warmestSolidK = bound.anchorK + bound.maxSlope * (pressurePa - bound.anchorPa);
+  if (temperatureK <= warmestSolidK) {
+    throw new OutOfRangeError([
+      "temperature ",
+      q.T(temperatureK),
+      " at ",
+      q.p(pressurePa),
+      ` may lie on either side of the melting line of ${substance.name}: no melting curve is ` +
+        "published in Phasecell's sources, and between the triple-point temperature (",
+      q.T(bound.anchorK),
+      ") and ",
+      q.T(warmestSolidK),
+      ` at this pressure ${substance.name} may be solid or liquid (${bound.basis}); states ` +
+        "colder than the triple point are solid, warmer than the upper limit fluid",
+    ]);
+  }
+  return fluidState(substance, temperatureK, pressurePa);
+}
+
 /** The melting branch whose pressure band holds p; `seamK` set inside a seam (see below). */
 interface MeltingBand {
   readonly branch: CurveBranch;
@@ -134,6 +191,7 @@ function meltingBandAt(substance: SubstanceDefinition, pressurePa: number): Melt
     ]);
   }
   const branches = substance.curves.melting;
+  if (branches.length === 0) throw noMeltingCurve(substance);
   for (const branch of branches) {
     if (branchCoversPressure(branch, pressurePa)) return { branch };
   }
@@ -204,6 +262,7 @@ function findForm(substance: SubstanceDefinition, form: string): CurveBranch {
  */
 export function meltingPressure(substance: SubstanceDefinition, temperatureK: number, form?: string): number {
   checkTemperature(temperatureK);
+  if (substance.curves.melting.length === 0) throw noMeltingCurve(substance);
   if (form !== undefined && form.trim() !== "") {
     const branch = findForm(substance, form);
     if (!branchCoversTemperature(branch, temperatureK)) {
@@ -277,6 +336,7 @@ export function phaseAt(substance: SubstanceDefinition, temperatureK: number, pr
     return { phase: "vapor", detail: "superheated vapor" };
   }
 
+  if (substance.curves.melting.length === 0) return phaseWithoutMeltingCurve(substance, temperatureK, pressurePa);
   const band = meltingBandAt(substance, pressurePa);
   const solid = band.branch.solid ?? "solid";
   const side = sideOfMeltingCurve(band, temperatureK, pressurePa);
@@ -294,7 +354,7 @@ function fluidState(substance: SubstanceDefinition, temperatureK: number, pressu
       ? { phase: "supercritical fluid", detail: "supercritical fluid" }
       : { phase: "gas", detail: "gas" };
   }
-  const boilingPa = substance.curves.boiling.pressure(temperatureK);
+  const boilingPa = pressureOnBranch(substance.curves.boiling, temperatureK, substance.name);
   if (pressurePa > boilingPa) return { phase: "liquid", detail: "compressed liquid" };
   if (pressurePa === boilingPa) return { phase: "liquid + vapor", detail: "saturated liquid + vapor" };
   return { phase: "vapor", detail: "superheated vapor" };

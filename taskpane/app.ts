@@ -1,12 +1,15 @@
 /**
- * Puts the pane together: heading, outside-Excel notice, selectors, cautions, and the reference
- * section, which is rebuilt whenever the substance or the display units change. Knows nothing of
- * Office: the entry point tells it the host once office.js has answered.
+ * Puts the pane together: heading, outside-Excel notice, selectors, cautions, the heating and
+ * cooling path, and the reference section, which is rebuilt whenever the substance or the display
+ * units change. Knows nothing of Office: the entry point tells it the host once office.js has
+ * answered, and hands it what the workbook's selection holds.
  */
 import { SUBSTANCES } from "../core/substances/registry";
 import type { SubstanceDefinition } from "../core/substances/types";
 import { DISPLAY_UNITS, displayUnitsById, type DisplayUnits } from "./data/display-units";
+import type { SelectionView } from "./data/path-table";
 import { referenceData } from "./data/rows";
+import { createPathSection } from "./path-section";
 import { renderCautions } from "./render/cautions";
 import { renderConstantsTable } from "./render/constants-table";
 import { renderControls } from "./render/controls";
@@ -19,6 +22,8 @@ import { renderSources } from "./render/sources";
 export interface Pane {
   /** Tells the pane where it runs: "Excel", another host name, or null outside Office. */
   setHost(host: string | null): void;
+  /** Shows what the workbook's selection holds (a PHASE.PATH result is drawn). */
+  showSelection(view: SelectionView): void;
 }
 
 function substanceById(id: string): SubstanceDefinition {
@@ -64,8 +69,13 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
   let units = DISPLAY_UNITS[0]!;
   const noticeSlot = el(doc, "div", { class: "notice-slot" });
   const referenceSlot = el(doc, "div", { class: "reference-slot" });
-  const rerender = (): void => {
+  const path = createPathSection(doc, substance, units);
+  const renderReferenceSlot = (): void => {
     referenceSlot.replaceChildren(renderReference(doc, substance, units));
+  };
+  const rerender = (): void => {
+    renderReferenceSlot();
+    path.setContext(substance, units);
   };
   root.replaceChildren(
     el(doc, "header", { class: "pane-header" }, [
@@ -88,12 +98,16 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
       },
     }),
     renderCautions(doc),
+    path.element,
     referenceSlot,
   );
-  rerender();
+  renderReferenceSlot();
   return {
     setHost(host) {
       noticeSlot.replaceChildren(...(host === "Excel" ? [] : [renderOutsideExcelNotice(doc)]));
+    },
+    showSelection(view) {
+      path.showSelection(view);
     },
   };
 }

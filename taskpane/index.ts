@@ -1,9 +1,11 @@
 /**
- * Entry of the pane bundle. The reference data render at once (they need no Office); the
- * outside-Excel notice and the Office theme follow when office.js has answered.
+ * Entry of the pane bundle. The reference data and the pane's own path render at once (they need
+ * no Office); the outside-Excel notice, the Office theme and, in Excel, the selected PATH result
+ * follow when office.js has answered.
  */
 import { mountPane } from "./app";
 import { officeColorScheme, officeHost } from "./office";
+import { followSelection } from "./office-selection";
 
 function start(): void {
   const root = document.getElementById("app");
@@ -13,6 +15,7 @@ function start(): void {
     pane.setHost(host);
     const scheme = officeColorScheme();
     if (scheme) document.documentElement.dataset["scheme"] = scheme;
+    if (host === "Excel") followSelection((view) => pane.showSelection(view));
   });
 }
 

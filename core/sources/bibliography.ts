@@ -84,6 +84,178 @@ const entries = [
       "(refrigerant numbers)",
     locator: "ANSI/ASHRAE 34",
   },
+  // Engineering-grade substance library: handbooks, compilations and reference-EOS papers.
+  // DOIs and ISBNs marked "from memory" were written down without access to the publisher's page.
+  {
+    id: "vdi-heat-atlas-2010",
+    short: "VDI Heat Atlas (2010), D3.1",
+    reference:
+      "VDI e.V. (ed.), VDI Heat Atlas, 2nd ed., Springer, Berlin Heidelberg, 2010; part D3.1, " +
+      "M. Kleiber, R. Joh, Liquids and Gases: Properties of Pure Fluid Substances (saturation " +
+      "tables; PPDS equations for vapour pressure and enthalpy of vaporization)",
+    // DOI from memory.
+    locator: "doi:10.1007/978-3-540-77877-6",
+  },
+  {
+    id: "poling-2001",
+    short: "Poling et al. (2001), App. A",
+    reference:
+      "B. E. Poling, J. M. Prausnitz, J. P. O'Connell, The Properties of Gases and Liquids, 5th " +
+      "ed., McGraw-Hill, New York, 2001; Appendix A (critical constants, Wagner and Antoine " +
+      "vapour-pressure constants, ideal-gas heat-capacity polynomials)",
+    // ISBN from memory.
+    locator: "ISBN 0-07-011682-2",
+  },
+  {
+    id: "crc-handbook-95",
+    short: "CRC Handbook, 95th ed. (2014)",
+    reference:
+      "W. M. Haynes, T. J. Bruno, D. R. Lide (eds.), CRC Handbook of Chemistry and Physics, 95th " +
+      "ed., CRC Press, Boca Raton, FL, 2014 (tables of physical constants of organic and " +
+      "inorganic compounds, enthalpy of fusion, enthalpy of vaporization)",
+    // ISBN from memory.
+    locator: "ISBN 978-1-4822-0867-2",
+  },
+  {
+    id: "staveley-1981",
+    short: "Staveley et al. (1981)",
+    reference:
+      "L. A. K. Staveley, L. Q. Lobo, J. C. G. Calado, Triple-points of low melting substances " +
+      "and their use in cryogenic work, Cryogenics 21, 131-144 (1981); temperatures on ITS-90",
+    // DOI from memory.
+    locator: "doi:10.1016/0011-2275(81)90264-2",
+  },
+  {
+    id: "perry-2008",
+    short: "Perry's Handbook, 8th ed. (2008)",
+    reference:
+      "D. W. Green, R. H. Perry (eds.), Perry's Chemical Engineers' Handbook, 8th ed., " +
+      "McGraw-Hill, New York, 2008; Section 2, Table 2-8 (vapour pressure, DIPPR Eq. 101) and " +
+      "Table 2-153 (heat capacity of liquids)",
+    // ISBN from memory.
+    locator: "ISBN 978-0-07-142294-9",
+  },
+  {
+    id: "mathews-1972",
+    short: "Mathews (1972)",
+    reference:
+      "J. F. Mathews, The critical constants of inorganic substances, Chem. Rev. 72, 71-100 (1972)",
+    // DOI from memory.
+    locator: "doi:10.1021/cr60275a004",
+  },
+  {
+    id: "iupac-atomic-weights-2007",
+    short: "IUPAC atomic weights 2007",
+    reference:
+      "M. E. Wieser, M. Berglund, Atomic weights of the elements 2007 (IUPAC Technical Report), " +
+      "Pure Appl. Chem. 81, 2131-2156 (2009)",
+    // DOI from memory.
+    locator: "doi:10.1351/PAC-REP-09-08-03",
+  },
+  {
+    id: "span-2000-nitrogen",
+    short: "Span et al. (2000), nitrogen",
+    reference:
+      "R. Span, E. W. Lemmon, R. T. Jacobsen, W. Wagner, A. Yokozeki, A reference equation of " +
+      "state for the thermodynamic properties of nitrogen for temperatures from 63.151 to 1000 K " +
+      "and pressures to 2200 MPa, J. Phys. Chem. Ref. Data 29, 1361-1433 (2000)",
+    // DOI from memory.
+    locator: "doi:10.1063/1.1349047",
+  },
+  {
+    id: "tegeler-1999-argon",
+    short: "Tegeler et al. (1999), argon",
+    reference:
+      "Ch. Tegeler, R. Span, W. Wagner, A new equation of state for argon covering the fluid " +
+      "region for temperatures from the melting line to 700 K at pressures up to 1000 MPa, " +
+      "J. Phys. Chem. Ref. Data 28, 779-850 (1999)",
+    // DOI from memory.
+    locator: "doi:10.1063/1.556037",
+  },
+  {
+    id: "leachman-2009-hydrogen",
+    short: "Leachman et al. (2009), hydrogen",
+    reference:
+      "J. W. Leachman, R. T. Jacobsen, S. G. Penoncello, E. W. Lemmon, Fundamental equations of " +
+      "state for parahydrogen, normal hydrogen, and orthohydrogen, J. Phys. Chem. Ref. Data 38, " +
+      "721-748 (2009)",
+    // DOI from memory.
+    locator: "doi:10.1063/1.3160306",
+  },
+  {
+    id: "tillner-roth-1994-r134a",
+    short: "Tillner-Roth & Baehr (1994), R-134a",
+    reference:
+      "R. Tillner-Roth, H. D. Baehr, An international standard formulation for the " +
+      "thermodynamic properties of 1,1,1,2-tetrafluoroethane (HFC-134a) for temperatures from " +
+      "170 K to 455 K and pressures up to 70 MPa, J. Phys. Chem. Ref. Data 23, 657-729 (1994)",
+    // DOI from memory.
+    locator: "doi:10.1063/1.555958",
+  },
+  {
+    id: "nist-janaf-1998",
+    short: "NIST-JANAF (1998)",
+    reference:
+      "M. W. Chase Jr., NIST-JANAF Thermochemical Tables, 4th ed., J. Phys. Chem. Ref. Data " +
+      "Monograph 9 (1998)",
+    locator: "J. Phys. Chem. Ref. Data Monograph 9",
+  },
+  {
+    id: "peng-robinson-1976",
+    short: "Peng & Robinson (1976)",
+    reference:
+      "D.-Y. Peng, D. B. Robinson, A new two-constant equation of state, Ind. Eng. Chem. " +
+      "Fundam. 15, 59-64 (1976)",
+    // DOI from memory.
+    locator: "doi:10.1021/i160057a011",
+  },
+  {
+    id: "watson-1943",
+    short: "Watson (1943)",
+    reference:
+      "K. M. Watson, Thermodynamics of the liquid state, Ind. Eng. Chem. 35, 398-406 (1943); " +
+      "the temperature scaling of the enthalpy of vaporization as given by Poling et al., The " +
+      "Properties of Gases and Liquids, 5th ed. (2001), Eq. (7-12.1)",
+    // DOI from memory.
+    locator: "doi:10.1021/ie50400a004",
+  },
+  {
+    id: "pitzer-1955",
+    short: "Pitzer et al. (1955)",
+    reference:
+      "K. S. Pitzer, D. Z. Lippmann, R. F. Curl, C. M. Huggins, D. E. Petersen, The volumetric " +
+      "and thermodynamic properties of fluids. II. Compressibility factor, vapor pressure and " +
+      "entropy of vaporization, J. Am. Chem. Soc. 77, 3433-3440 (1955) (acentric factor)",
+    // DOI from memory.
+    locator: "doi:10.1021/ja01618a002",
+  },
+  {
+    id: "si-brochure-2019",
+    short: "SI Brochure (2019)",
+    reference:
+      "BIPM, The International System of Units (SI), 9th ed., 2019: the Avogadro and Boltzmann " +
+      "constants are exact, so the molar gas constant R = N_A k = 8.314 462 618 ... J/(mol K) " +
+      "is exact",
+    locator: "BIPM SI Brochure, 9th ed. (2019)",
+  },
+  // Carbon dioxide at reference grade.
+  {
+    id: "span-wagner-1996",
+    short: "Span & Wagner (1996)",
+    reference:
+      "R. Span, W. Wagner, A New Equation of State for Carbon Dioxide Covering the Fluid Region " +
+      "from the Triple-Point Temperature to 1100 K at Pressures up to 800 MPa, J. Phys. Chem. " +
+      "Ref. Data 25, 1509-1596 (1996)",
+    locator: "doi:10.1063/1.555991",
+  },
+  {
+    id: "jager-span-2012",
+    short: "Jäger & Span (2012)",
+    reference:
+      "A. Jäger, R. Span, Equation of State for Solid Carbon Dioxide Based on the Gibbs Free " +
+      "Energy, J. Chem. Eng. Data 57, 590-597 (2012)",
+    locator: "doi:10.1021/je2011677",
+  },
 ] as const satisfies readonly Citation[];
 
 /** Citation ids known to the bibliography. */

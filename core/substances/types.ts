@@ -56,7 +56,10 @@ export type ConstantKey =
   | "normalBoilingPoint"
   | "normalMeltingPoint"
   | "molarMass"
-  | "specificGasConstant";
+  | "specificGasConstant"
+  | "acentricFactor"
+  | "enthalpyOfFusion"
+  | "enthalpyOfVaporization";
 
 /** A constant with its citation. */
 export interface ConstantValue {
@@ -87,8 +90,29 @@ export interface EnthalpyModel {
    * model exists (NoSuchStateError).
    */
   readonly enthalpy: (side: PhaseSide, temperatureK: number, pressurePa: number, solid: string) => number;
-  /** Lowest and highest temperature, K, at which some phase has an enthalpy on the isobar p. */
-  readonly temperatureLimits: (pressurePa: number) => readonly [number, number];
+  /**
+   * Lowest and highest temperature, K, at which the phase on `side` (or, without a side, some
+   * phase) has an enthalpy on the isobar p.
+   */
+  readonly temperatureLimits: (pressurePa: number, side?: PhaseSide) => readonly [number, number];
+}
+
+/**
+ * What the phase map may assume where no melting curve is published: the solid–liquid line
+ * starts at an anchor point (the triple point) and its temperature rises with pressure no faster
+ * than `maxSlope`. A state colder than the anchor at a higher pressure is then certainly solid,
+ * a state warmer than anchor + maxSlope · (p − anchor pressure) certainly fluid; between the two
+ * the phase map does not decide.
+ */
+export interface MeltingBound {
+  /** Anchor temperature, K (the triple point). */
+  readonly anchorK: number;
+  /** Anchor pressure, Pa (the triple point). */
+  readonly anchorPa: number;
+  /** Upper bound of dT/dp along the melting line, K/Pa. */
+  readonly maxSlope: number;
+  /** Why the bound holds, in words a reviewer can check. */
+  readonly basis: string;
 }
 
 /** A substance: identity, constants, curves, and the model of its phase map. */
@@ -108,9 +132,14 @@ export interface SubstanceDefinition {
   readonly curves: {
     readonly boiling: CurveBranch;
     readonly sublimation?: CurveBranch;
-    /** Ordered by rising pressure; contiguous where they meet at solid–solid–liquid points. */
+    /**
+     * Ordered by rising pressure; contiguous where they meet at solid–solid–liquid points. Empty
+     * where no melting equation is published: see `meltingBound`.
+     */
     readonly melting: readonly CurveBranch[];
   };
+  /** Required when `curves.melting` is empty: how far the unpublished melting line may lie. */
+  readonly meltingBound?: MeltingBound;
   /** How the phase at (T, p) is decided, and what is approximate about it. */
   readonly stateModel: ModelInfo;
   readonly limits: CoverageLimits;

@@ -162,6 +162,29 @@ export const water: SubstanceDefinition = {
       source: "iapws-r10-06",
       note: "R10-06(2009) Table 6, state at 101 325 Pa on the ice Ih melting curve of R14-08",
     },
+    acentricFactor: {
+      // Pitzer's definition ω = −log10(p_s(0.7 T_c) / p_c) − 1 evaluated with IF97 Eq. (30).
+      value: -Math.log10(saturationPressureIF97(0.7 * 647.096) / 22.064e6) - 1,
+      dimension: "dimensionless",
+      source: "iapws-if97",
+      note: "computed: −log10(p_s(0.7 T_c) / p_c) − 1 (Pitzer et al. 1955) with IF97 Eq. (30) (0.3443)",
+    },
+    enthalpyOfFusion: {
+      value:
+        waterEnthalpy.enthalpy("liquid", TRIPLE_T, TRIPLE_P, "") -
+        waterEnthalpy.enthalpy("solid", TRIPLE_T, TRIPLE_P, "ice Ih"),
+      dimension: "specificEnergy",
+      source: "iapws-r10-06",
+      note: "computed at the triple point: IF97 region 1 liquid minus R10-06(2009) ice Ih, on their shared zero",
+    },
+    enthalpyOfVaporization: {
+      value:
+        waterEnthalpy.enthalpy("vapor", saturationTemperatureIF97(STANDARD_ATMOSPHERE), STANDARD_ATMOSPHERE, "") -
+        waterEnthalpy.enthalpy("liquid", saturationTemperatureIF97(STANDARD_ATMOSPHERE), STANDARD_ATMOSPHERE, ""),
+      dimension: "specificEnergy",
+      source: "iapws-if97",
+      note: "computed at 101 325 Pa on the IF97 boiling curve: region 2 vapour minus region 1 liquid",
+    },
   },
   curves: { boiling, sublimation, melting },
   stateModel: {

@@ -15,21 +15,29 @@ export interface DisplayUnits {
   /** The same text a user would type as the `units` argument of a PHASE function. */
   readonly unitsText: string;
   readonly system: UnitSystem;
+  /**
+   * The units text of the heating and cooling path: the same temperature and pressure, with a
+   * mass and an energy unit (the reference data's text may carry an amount unit for molar mass,
+   * which would turn the path's mass into moles).
+   */
+  readonly pathUnitsText: string;
+  readonly pathSystem: UnitSystem;
 }
 
-function choice(id: DisplayUnitsId, label: string, unitsText: string): DisplayUnits {
-  return { id, label, unitsText, system: parseUnits(unitsText) };
+function choice(id: DisplayUnitsId, label: string, unitsText: string, pathUnitsText: string): DisplayUnits {
+  return { id, label, unitsText, system: parseUnits(unitsText), pathUnitsText, pathSystem: parseUnits(pathUnitsText) };
 }
 
 /**
  * SI keeps the functions' defaults (K, Pa, kg/m3, kg/mol), so the pane shows the very numbers a
  * cell returns without a units argument. The other two add the mass and amount units their users
- * expect for molar mass (g/mol; lb/lbmol) and, for US units, density in lb/ft3.
+ * expect for molar mass (g/mol; lb/lbmol) and, for US units, density in lb/ft3. For paths, SI
+ * keeps J and kg; the others use the energy units their users quote heat loads in (kJ; BTU).
  */
 export const DISPLAY_UNITS: readonly DisplayUnits[] = [
-  choice("si", "SI (K, Pa)", "K Pa"),
-  choice("c-bar", "°C, bar", "C bar g mol"),
-  choice("f-psi", "°F, psi", "F psi lb lbmol lb/ft3"),
+  choice("si", "SI (K, Pa)", "K Pa", "K Pa J kg"),
+  choice("c-bar", "°C, bar", "C bar g mol", "C bar kJ kg"),
+  choice("f-psi", "°F, psi", "F psi lb lbmol lb/ft3", "F psi BTU lb"),
 ];
 
 /** The choice with this id; the first (SI) for an unknown id. */

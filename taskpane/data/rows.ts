@@ -84,9 +84,12 @@ export interface ReferenceData {
   readonly sources: readonly Citation[];
 }
 
-/** Converts an SI value to display units and prints it the way core prints numbers. */
-export function showQuantity(system: UnitSystem, dimension: Dimension, valueSI: number): ShownQuantity {
-  const value = fromSI(system, dimension, valueSI);
+/**
+ * Converts an SI value to display units and prints it the way core prints numbers. `molarMass`
+ * (kg/mol) converts specific quantities when the display units are molar (g/mol, lb/lbmol).
+ */
+export function showQuantity(system: UnitSystem, dimension: Dimension, valueSI: number, molarMass?: number): ShownQuantity {
+  const value = fromSI(system, dimension, valueSI, molarMass);
   return {
     value,
     text: formatNumber(value),
@@ -98,11 +101,12 @@ export function showQuantity(system: UnitSystem, dimension: Dimension, valueSI: 
 
 /** The constants of a substance, in catalogue order. */
 export function constantRows(substance: SubstanceDefinition, system: UnitSystem): ConstantRow[] {
+  const molarMass = substance.constants.molarMass?.value;
   return constantsOf(substance).map((constant) => ({
     key: constant.entry.key,
     label: constant.entry.label,
     symbol: constant.entry.symbol,
-    quantity: showQuantity(system, constant.dimension, constant.value),
+    quantity: showQuantity(system, constant.dimension, constant.value, molarMass),
     note: constant.note,
     source: citation(constant.source),
   }));

@@ -2,8 +2,9 @@
  * The built shared page (dist/taskpane.html) in headless Chromium, outside Excel: office.js is
  * served from the npm fixture in place of Microsoft's CDN, every other request that would leave
  * 127.0.0.1 is aborted and recorded, and the pane must show core's constants, the cautions and the
- * outside-Excel notice, legibly at 350 px in light and dark schemes. Screenshots go to
- * test-artifacts/ (not committed).
+ * outside-Excel notice, legibly at 350 px in light and dark schemes. A water path entered in the
+ * pane is drawn as a heating curve with one segment per core step, ending at core's PATHENERGY.
+ * Screenshots go to test-artifacts/ (not committed).
  *
  * Needs `npm run build` first and Debian's chromium (CHROMIUM_PATH, default /usr/bin/chromium).
  */
@@ -16,9 +17,10 @@ import { chromium, type Browser, type BrowserContext, type Page } from "playwrig
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { constantOf } from "../../core/constants";
 import { formatNumber } from "../../core/errors";
-import { findSubstance } from "../../core/substances/registry";
-import { fromSI } from "../../core/units/units";
-import { DISPLAY_UNITS } from "../../taskpane/data/display-units";
+import { isobaricPath, pathEnergy } from "../../core/path";
+import { findSubstance, SUBSTANCES } from "../../core/substances/registry";
+import { fromSI, toSI } from "../../core/units/units";
+import { DISPLAY_UNITS, displayUnitsById } from "../../taskpane/data/display-units";
 import { expectClose } from "../helpers/expect-close";
 
 const REPO = fileURLToPath(new URL("../..", import.meta.url));
@@ -61,6 +63,61 @@ function officeFixtureFor(url: URL): string | null {
   if (!url.pathname.startsWith(CDN_PREFIX)) return null;
   const file = path.join(OFFICE_JS_DIST, path.normalize(url.pathname.slice(CDN_PREFIX.length)));
   return file.startsWith(OFFICE_JS_DIST + path.sep) && existsSync(file) ? file : null;
+}
+
+/** What the drawn heating curve shows, read from the page. */
+interface DrawnChart {
+  readonly steps: number;
+  readonly segments: number;
+  readonly total: string;
+  /** data-end-total of each segment. */
+  readonly ends: string[];
+  /** End of the last segment, in the SVG's user units. */
+  readonly lastEndX: number;
+  /** Each x tick: its position (user units) and its label as a number. */
+  readonly ticks: { x: number; value: number }[];
+  readonly styles: string[];
+}
+
+function drawnChart(page: Page, selector: string): Promise<DrawnChart> {
+  return page.evaluate((sel) => {
+    const svg = document.querySelector<SVGSVGElement>(sel)!;
+    const segments = Array.from(svg.querySelectorAll<SVGPathElement>("path.segment"));
+    const last = segments.at(-1)!;
+    const ticks = Array.from(svg.querySelectorAll<SVGGElement>("g.axis-x .tick")).map((tick) => ({
+      x: Number(/translate\(([-\d.e]+)/.exec(tick.getAttribute("transform") ?? "")?.[1]),
+      // d3's labels group thousands with commas and write minus as U+2212.
+      value: Number((tick.textContent ?? "").replace(/,/g, "").replace(/\u2212/g, "-")),
+    }));
+    return {
+      steps: Number(svg.dataset["steps"]),
+      segments: segments.length,
+      total: svg.dataset["total"] ?? "",
+      ends: segments.map((p) => p.dataset["endTotal"] ?? ""),
+      lastEndX: last.getPointAtLength(last.getTotalLength()).x,
+      ticks,
+      styles: segments.map((p) => p.getAttribute("class") ?? ""),
+    };
+  }, selector);
+}
+
+/** Contrast of every drawn segment's stroke against the page background. */
+function strokeContrasts(page: Page): Promise<{ style: string; ratio: number }[]> {
+  return page.evaluate(() => {
+    const rgb = (color: string) => (/rgba?\(([^)]+)\)/.exec(color)?.[1] ?? "0,0,0").split(/[\s,/]+/).filter(Boolean).map(Number);
+    const channel = (c: number) => {
+      const v = c / 255;
+      return v <= 0.04045 ? v / 12.92 : ((v + 0.055) / 1.055) ** 2.4;
+    };
+    const luminance = (c: number[]) => 0.2126 * channel(c[0]!) + 0.7152 * channel(c[1]!) + 0.0722 * channel(c[2]!);
+    const background = luminance(rgb(getComputedStyle(document.body).backgroundColor));
+    return Array.from(document.querySelectorAll("path.segment, path.marker")).map((p) => {
+      const style = getComputedStyle(p);
+      const paint = p.classList.contains("marker") ? style.fill : style.stroke;
+      const [hi, lo] = [luminance(rgb(paint)), background].sort((a, b) => b - a);
+      return { style: p.getAttribute("class") ?? "", ratio: (hi! + 0.05) / (lo! + 0.05) };
+    });
+  });
 }
 
 /** WCAG 2.x contrast of every visible text against its effective background, in the page. */
@@ -124,6 +181,8 @@ if (!HAVE_CHROMIUM) {
     const websockets: string[] = [];
     const pageErrors: string[] = [];
     const consoleErrors: string[] = [];
+    /** Console errors whose source is not office.js (the intercepted CDN files). */
+    const ownConsoleErrors: string[] = [];
     const water = findSubstance("water");
 
     beforeAll(async () => {
@@ -185,7 +244,10 @@ if (!HAVE_CHROMIUM) {
       page.on("websocket", (ws) => websockets.push(ws.url()));
       page.on("pageerror", (error) => pageErrors.push(error.message));
       page.on("console", (message) => {
-        if (message.type() === "error") consoleErrors.push(message.text());
+        if (message.type() !== "error") return;
+        consoleErrors.push(message.text());
+        const source = message.location().url;
+        if (!source.startsWith(`https://${CDN_HOST}/`)) ownConsoleErrors.push(`${message.text()} (${source})`);
       });
       await page.goto(`${base}/taskpane.html`);
       await page.locator("table.constants tr.constant").first().waitFor();
@@ -226,7 +288,7 @@ if (!HAVE_CHROMIUM) {
       const options = await page.locator("#substance-select option").evaluateAll((os) =>
         os.map((o) => (o as HTMLOptionElement).value),
       );
-      expect(options).toEqual(["water"]);
+      expect(options).toEqual(SUBSTANCES.map((s) => s.id));
     });
 
     for (const units of DISPLAY_UNITS) {
@@ -255,13 +317,148 @@ if (!HAVE_CHROMIUM) {
       expect(await shown("Pt")).toBe("611.657 Pa");
     });
 
-    it("is keyboard operable: selectors first, then a source opens its full reference", async () => {
+    it("draws the demo path when it opens, one segment per core step", async () => {
+      // The pane opens in SI with its demo path (2.5 kg from 248.15 K to 423.15 K at 3e5 Pa).
+      await page.selectOption("#units-select", "si");
+      await page.locator('.reference-data[data-units="si"]').waitFor();
+      const chart = await drawnChart(page, "#path-result svg.path-chart");
+      const steps = isobaricPath(water, 2.5, 248.15, 423.15, 3e5);
+      expect(chart.segments).toBe(steps.length);
+      expect(chart.steps).toBe(steps.length);
+      expect(await page.locator("#path-result table.path-steps tbody.step").count()).toBe(steps.length);
+      expect(await page.locator("#path-selection").textContent()).toMatch(/In Excel, select any cell of a PHASE.PATH result/);
+    });
+
+    it("draws a water path entered in °C and bar: a segment per step, ending at PATHENERGY", async () => {
+      const units = displayUnitsById("c-bar");
+      await page.selectOption("#units-select", units.id);
+      await page.locator('.reference-data[data-units="c-bar"]').waitFor();
+      expect(await page.locator('label[for="path-start"]').textContent()).toBe("Start T1, °C");
+      expect(await page.locator('label[for="path-pressure"]').textContent()).toBe("Pressure, bar");
+      // 1 kg of water from -20 °C to 120 °C at 1.01325 bar, typed and sent with Enter.
+      await page.fill("#path-mass", "1");
+      await page.fill("#path-start", "-20");
+      await page.fill("#path-end", "120");
+      await page.fill("#path-pressure", "1.01325");
+      await page.locator("#path-pressure").press("Enter");
+      await expect.poll(() => page.locator(".path-status").textContent()).toMatch(/^Heating path drawn: 5 steps/);
+
+      const system = units.pathSystem;
+      const [t1, t2, p] = [toSI(system, "temperature", -20), toSI(system, "temperature", 120), toSI(system, "pressure", 1.01325)];
+      const steps = isobaricPath(water, 1, t1, t2, p);
+      const totalKJ = fromSI(system, "energy", pathEnergy(water, 1, t1, t2, p));
+      const chart = await drawnChart(page, "#path-result svg.path-chart");
+      expect(chart.segments).toBe(steps.length);
+      expect(chart.styles.map((c) => c.replace("segment ", ""))).toEqual([
+        "style-solid",
+        "style-change",
+        "style-liquid",
+        "style-change",
+        "style-vapor",
+      ]);
+      // The endpoint is core's PATHENERGY in kJ (the browser's Math functions may differ from
+      // Node's in the last bit, so to 1e-12) ...
+      expectClose(Number(chart.total), totalKJ, { rel: 1e-12 });
+      expect(chart.ends.at(-1)).toBe(chart.total);
+      // ... and where it is drawn, read back through the axis ticks, is the same heat within half
+      // a drawing unit (d3 shifts ticks by half a unit for crisp lines).
+      const [a, b] = [chart.ticks[0]!, chart.ticks.at(-1)!];
+      const perUnit = (b.value - a.value) / (b.x - a.x);
+      expect(chart.ticks.length).toBeGreaterThanOrEqual(3);
+      expectClose(a.value + (chart.lastEndX - a.x) * perUnit, totalKJ, { abs: 0.6 * Math.abs(perUnit) });
+      expect(chart.ticks.at(-1)!.value).toBeLessThanOrEqual(totalKJ);
+      // The table's last running total is the same number as printed by core's formatNumber.
+      expect(await page.locator("#path-result tbody.step").last().locator("td.total").textContent()).toBe(formatNumber(totalKJ));
+      expect(await page.locator("#path-result .formula code").textContent()).toBe(
+        '=PHASE.PATH("water", 1, -20, 120, 1.01325, "C bar kJ kg")',
+      );
+      expect(await page.locator("#path-result svg.path-chart").getAttribute("aria-labelledby")).toBe("path-chart-title path-chart-desc");
+      expect(await page.locator("#path-chart-desc").textContent()).toMatch(/^5 steps, 3090\.29 kJ in all\. 1, heat ice Ih from -20 to/);
+    });
+
+    it("keeps the entered path when the display units change", async () => {
+      await page.selectOption("#units-select", "f-psi");
+      await page.locator('.reference-data[data-units="f-psi"]').waitFor();
+      // 1 kg = 2.20462 lb; -20 °C = -4 °F; 120 °C = 248 °F; 1.01325 bar = 14.6959 psi
+      // (NIST SP 811 App. B conversion factors, exact by definition).
+      expect(await page.inputValue("#path-mass")).toBe("2.20462");
+      expect(await page.inputValue("#path-start")).toBe("-4");
+      expect(await page.inputValue("#path-end")).toBe("248");
+      expect(await page.inputValue("#path-pressure")).toBe("14.6959");
+      const system = displayUnitsById("f-psi").pathSystem;
+      const mass = toSI(system, "mass", 2.20462);
+      const [t1, t2, p] = [toSI(system, "temperature", -4), toSI(system, "temperature", 248), toSI(system, "pressure", 14.6959)];
+      const chart = await drawnChart(page, "#path-result svg.path-chart");
+      expectClose(Number(chart.total), fromSI(system, "energy", pathEnergy(water, mass, t1, t2, p)), { rel: 1e-12 });
+      await page.selectOption("#units-select", "c-bar");
+      await page.locator('.reference-data[data-units="c-bar"]').waitFor();
+      await page.fill("#path-mass", "1");
+      await page.fill("#path-start", "-20");
+      await page.fill("#path-end", "120");
+      await page.fill("#path-pressure", "1.01325");
+      await page.click(".path-form button");
+    });
+
+    it("says what to change, in the display units, and draws nothing for a bad input", async () => {
+      await page.fill("#path-mass", "one");
+      await page.click(".path-form button");
+      const alert = page.locator("#path-error[role='alert']");
+      expect(await alert.textContent()).toBe('Mass "one" is not a number: enter a number in kg (decimal point, e.g. 1.5).');
+      expect(await page.getAttribute("#path-mass", "aria-invalid")).toBe("true");
+      expect(await page.getAttribute("#path-mass", "aria-describedby")).toBe("path-error");
+      expect(await page.locator("#path-result svg").count()).toBe(0);
+      await page.fill("#path-mass", "1");
+      await page.fill("#path-start", "-300");
+      await page.click(".path-form button");
+      expect(await alert.textContent()).toMatch(/^Start temperature -300 °C is at or below absolute zero/);
+      await page.evaluate(() => window.scrollTo(0, document.querySelector(".path-section")!.getBoundingClientRect().top + window.scrollY));
+      await page.locator(".path-section").screenshot({ path: path.join(ARTIFACTS, "path-error-350-light.png") });
+      await page.fill("#path-start", "-20");
+      await page.click(".path-form button");
+      expect(await alert.count()).toBe(0);
+      expect(await page.getAttribute("#path-start", "aria-invalid")).toBeNull();
+      expect(await page.locator("#path-result svg.path-chart").count()).toBe(1);
+    });
+
+    it("draws the path legibly at 350 and 320 px, light and dark: 4.5:1 lines and text, no sideways scrolling", async () => {
+      for (const scheme of ["light", "dark"] as const) {
+        await page.emulateMedia({ colorScheme: scheme });
+        for (const width of [350, 320]) {
+          await page.setViewportSize({ width, height: 700 });
+          expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+          const tooFaint = (await strokeContrasts(page)).filter((c) => c.ratio < 4.5);
+          expect(tooFaint, `${scheme} lines and markers`).toEqual([]);
+          expect(await lowContrastTexts(page, 4.5), `${scheme} at ${width} px`).toEqual([]);
+          // Nothing in the path section sticks out of it.
+          const overflow = await page.evaluate(() => {
+            const section = document.querySelector(".path-section")!.getBoundingClientRect();
+            return Array.from(document.querySelectorAll(".path-section *"))
+              .filter((e) => e.getBoundingClientRect().right > section.right + 0.5)
+              .map((e) => e.tagName);
+          });
+          expect(overflow, `${scheme} at ${width} px`).toEqual([]);
+          await page.locator(".path-section").screenshot({ path: path.join(ARTIFACTS, `path-${width}-${scheme}.png`) });
+        }
+      }
+      await page.emulateMedia({ colorScheme: "light" });
+      await page.setViewportSize({ width: 350, height: 700 });
+    });
+
+    it("is keyboard operable: selectors first, then the path inputs, then a source opens its full reference", async () => {
       await page.locator("body").click({ position: { x: 1, y: 1 } });
       await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
       await page.keyboard.press("Tab");
       expect(await page.evaluate(() => document.activeElement?.id)).toBe("substance-select");
       await page.keyboard.press("Tab");
       expect(await page.evaluate(() => document.activeElement?.id)).toBe("units-select");
+      for (const id of ["path-mass", "path-start", "path-end", "path-pressure"]) {
+        await page.keyboard.press("Tab");
+        expect(await page.evaluate(() => document.activeElement?.id)).toBe(id);
+        // Each input is named by its label.
+        expect(await page.evaluate(() => (document.activeElement as HTMLInputElement).labels?.[0]?.textContent ?? "")).not.toBe("");
+      }
+      await page.keyboard.press("Tab");
+      expect(await page.evaluate(() => document.activeElement?.textContent)).toBe("Draw path");
       await page.keyboard.press("Tab");
       const controls = await page.evaluate(() => document.activeElement?.getAttribute("aria-controls"));
       expect(controls).toBe("constant-detail-tripleTemperature");
@@ -314,6 +511,16 @@ if (!HAVE_CHROMIUM) {
       }
       await page.emulateMedia({ colorScheme: "light" });
       await page.setViewportSize({ width: 350, height: 700 });
+    });
+
+    it("still made no outside request and broke no policy after drawing paths", () => {
+      expect(blocked).toEqual([]);
+      expect(websockets).toEqual([]);
+      expect(pageErrors).toEqual([]);
+      // Some seconds after loading outside Office, office.js itself tries to frame its telemetry
+      // page and to set an inline style; the page's policy blocks both and the console says so
+      // from office.js's own files. Nothing of ours may appear there.
+      expect(ownConsoleErrors).toEqual([]);
     });
 
     const functionsBundle = existsSync(path.join(DIST, "functions.js"));

@@ -30,7 +30,8 @@ describe("constant rows come from core", () => {
         expect(rows.map((r) => r.key)).toEqual(constants.map((c) => c.entry.key));
         rows.forEach((row, i) => {
           const constant = constants[i]!;
-          const expected = fromSI(units.system, constant.dimension, constant.value);
+          // Specific energies (enthalpies of fusion and vaporization) are molar in the molar display units.
+          const expected = fromSI(units.system, constant.dimension, constant.value, substance.constants.molarMass?.value);
           expect(row.quantity.value).toBe(expected);
           expect(row.quantity.text).toBe(formatNumber(expected));
           expect(row.quantity.unit).toBe(unitSymbol(units.system, constant.dimension));
@@ -71,6 +72,19 @@ describe("water constants against the published values", () => {
     expect(rowFor("si", "Pc").quantity.unit).toBe("Pa");
     expect(rowFor("si", "M").quantity.unit).toBe("kg/mol");
     expectClose(rowFor("si", "M").quantity.value, 0.018015268, { rel: 1e-15 });
+  });
+
+  // Regression pane-molar-specific (found and fixed 2026-12-02): once the constants gained
+  // enthalpies of fusion and vaporization (J/kg), the molar display units ("C bar g mol",
+  // "F psi lb lbmol …") threw "a molar unit needs a substance with a known molar mass" and the
+  // pane showed no reference data in °C or °F. Rows now convert with the substance's molar mass.
+  it("shows the enthalpies of fusion and vaporization per mole in the molar display units", () => {
+    const hfus = rowFor("c-bar", "Hfus");
+    const molarMass = water.constants.molarMass!.value;
+    expect(hfus.quantity.unit).toBe("J/mol");
+    expect(hfus.quantity.value).toBe(fromSI(displayUnitsById("c-bar").system, "specificEnergy", hfus.quantity.si, molarMass));
+    expectClose(hfus.quantity.value, hfus.quantity.si * molarMass, { rel: 1e-14 });
+    expect(rowFor("f-psi", "Hvap").quantity.unit).toBe("J/lbmol");
   });
 
   it("°C and bar", () => {
