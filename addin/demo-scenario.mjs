@@ -56,6 +56,26 @@ export const DEMO_ROWS = [
     args: ["water", -10, "C bar"],
   },
   {
+    where: "Heat to pull from a 12 kg tray of product water, 20 °C to -40 °C, before drying (kJ)",
+    id: "PATHENERGY",
+    args: ["water", 12, 20, -40, 1.01325, "C bar kJ kg"],
+  },
+  {
+    where: "Ice bank: 50 kg at -10 °C after 10 MJ of load: temperature, state, fraction melted",
+    id: "ENDSTATE",
+    args: ["water", 50, -10, 10, 1.01325, "C bar MJ kg"],
+  },
+  {
+    where: "Ice leaving the product during primary drying at -40 °C (kJ/kg)",
+    id: "LATENTHEAT",
+    args: ["water", "sublimation", -40, "C kJ kg"],
+  },
+  {
+    where: "Pressure-shift thawing: where the press melts ice held at -10 °C",
+    id: "CROSSINGS",
+    args: ["water", -10, 1, -10, 3000, "C bar"],
+  },
+  {
     where: "Critical temperature of water, for the relief-valve datasheet",
     id: "CONSTANT",
     args: ["water", "Tc", "C"],
