@@ -2,7 +2,7 @@
  * Speed of the hot paths, measured on one core in Node. Run with `npm run bench`.
  * Each case runs for a fixed wall-clock budget after a warm-up and reports evaluations per second.
  */
-import { pathEnergy } from "../core/path";
+import { pathEnergy, pathEnergyOnIsobar } from "../core/path";
 import { phaseAt, saturationPressure, saturationTemperature, meltingTemperature } from "../core/phase";
 import { findSubstance } from "../core/substances/registry";
 
@@ -38,6 +38,7 @@ async function main(): Promise<void> {
   const functions = await import("../functions/index");
   const water = findSubstance("water");
   const column = Array.from({ length: 1000 }, (_, i) => [-50 + i * 0.4]);
+  const atmosphere = pathEnergyOnIsobar(water, 101325);
   const cases: Case[] = [
     { name: "core saturationPressure (IF97 Eq. 30)", run: (i) => saturationPressure(water, 280 + (i % 300)) },
     { name: "core saturationTemperature (IF97 Eq. 31)", run: (i) => saturationTemperature(water, 1e3 + (i % 1000) * 2e4) },
@@ -46,6 +47,7 @@ async function main(): Promise<void> {
     // Goal: an isobaric path energy for water at 100 000 evaluations per second or more.
     { name: "core pathEnergy, water, ice to steam at 1 atm", run: (i) => pathEnergy(water, 1, 250 + (i % 10), 420, 101325) },
     { name: "core pathEnergy, water, liquid to liquid at 5 bar", run: (i) => pathEnergy(water, 1, 290 + (i % 10), 350, 5e5) },
+    { name: "core pathEnergyOnIsobar at 1 atm, liquid to vapour", run: (i) => atmosphere(1, 290 + (i % 10), 420) },
     {
       name: "PHASE.PATHENERGY over a 1000-cell column (per cell)",
       run: () => functions.pathEnergyFn([["water"]], [[1]], column, [[120]], [[1.01325]], "C bar kJ kg"),

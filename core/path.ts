@@ -136,8 +136,9 @@ function planPath(
   t1: number,
   t2: number,
   pressurePa: number,
+  isobarMarks: readonly Mark[] = marksOnIsobar(substance, pressurePa),
 ): Plan {
-  const marks = marksOnIsobar(substance, pressurePa).map((mark) => {
+  const marks = isobarMarks.map((mark) => {
     // An end within the merge tolerance of a mark is on it: the mark moves to the end exactly.
     for (const end of [t1, t2]) {
       if (Math.abs(end - mark.temperatureK) <= MERGE_TOLERANCE * mark.temperatureK) return { ...mark, temperatureK: end };
@@ -287,18 +288,35 @@ export function pathEnergy(
   t2: number,
   pressurePa: number,
 ): number {
-  checkPathInputs(massKg, t1, t2, pressurePa);
+  return pathEnergyOnIsobar(substance, pressurePa)(massKg, t1, t2);
+}
+
+/**
+ * {@link pathEnergy} with the isobar's phase-change temperatures found once, for many paths on
+ * one isobar (a column of start temperatures at one line pressure): the returned function gives
+ * the heat for a mass and two temperatures.
+ */
+export function pathEnergyOnIsobar(
+  substance: SubstanceDefinition,
+  pressurePa: number,
+): (massKg: number, t1: number, t2: number) => number {
+  checkPressure(pressurePa);
   const model = requireEnthalpy(substance);
-  if (t1 === t2) {
-    phaseAt(substance, t1, pressurePa);
-    return 0;
-  }
-  const plan = planPath(substance, model, t1, t2, pressurePa);
-  return (
-    massKg *
-    (model.enthalpy(sideOf(plan.end), t2, pressurePa, solidOf(plan.end)) -
-      model.enthalpy(sideOf(plan.start), t1, pressurePa, solidOf(plan.start)))
-  );
+  let marks: readonly Mark[] | undefined;
+  return (massKg, t1, t2) => {
+    checkPathInputs(massKg, t1, t2, pressurePa);
+    if (t1 === t2) {
+      phaseAt(substance, t1, pressurePa);
+      return 0;
+    }
+    marks ??= marksOnIsobar(substance, pressurePa);
+    const plan = planPath(substance, model, t1, t2, pressurePa, marks);
+    return (
+      massKg *
+      (model.enthalpy(sideOf(plan.end), t2, pressurePa, solidOf(plan.end)) -
+        model.enthalpy(sideOf(plan.start), t1, pressurePa, solidOf(plan.start)))
+    );
+  };
 }
 
 /** Where a path ends after a given heat: temperature, state and converted fraction. */

@@ -12,7 +12,8 @@ import {
   saturationPressure,
   saturationTemperature,
 } from "../core/phase";
-import { endState, isobaricPath, latentHeat, parseTransition, pathEnergy, specificEnthalpy } from "../core/path";
+import { endState, isobaricPath, latentHeat, parseTransition, pathEnergyOnIsobar, specificEnthalpy } from "../core/path";
+import type { SubstanceDefinition } from "../core/substances/types";
 import { PROVENANCE_HEADER, provenanceFor } from "../core/sources/provenance";
 import { findSubstance, SUBSTANCES } from "../core/substances/registry";
 import { fromSI, toSI } from "../core/units/units";
@@ -273,6 +274,8 @@ export function crossings(substance: any, t1: any, p1: any, t2: any, p2: any, un
  */
 export function pathEnergyFn(substance: any[][], mass: any[][], t1: any[][], t2: any[][], pressure: any[][], units?: any): any[][] {
   const readSubstance = substanceReader();
+  // One isobar serves every cell with the same substance and pressure (a column of states on one line).
+  let isobar: { substance: SubstanceDefinition; pressurePa: number; energy: (m: number, a: number, b: number) => number } | undefined;
   return evaluate([substance, mass, t1, t2, pressure], ["substance", "mass", "T1", "T2", "pressure"], units, (cells, system) => {
     const found = readSubstance(cells[0]);
     const molarMass = found.constants.molarMass?.value;
@@ -280,7 +283,10 @@ export function pathEnergyFn(substance: any[][], mass: any[][], t1: any[][], t2:
     const startK = toSI(system, "temperature", readNumber(cells[2], "T1"));
     const endK = toSI(system, "temperature", readNumber(cells[3], "T2"));
     const pressurePa = toSI(system, "pressure", readNumber(cells[4], "pressure"));
-    return fromSI(system, "energy", pathEnergy(found, massKg, startK, endK, pressurePa));
+    if (!isobar || isobar.substance !== found || isobar.pressurePa !== pressurePa) {
+      isobar = { substance: found, pressurePa, energy: pathEnergyOnIsobar(found, pressurePa) };
+    }
+    return fromSI(system, "energy", isobar.energy(massKg, startK, endK));
   });
 }
 
