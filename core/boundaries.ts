@@ -31,10 +31,16 @@ export function boundariesOnIsobar(substance: SubstanceDefinition, pressurePa: n
   const critical = criticalPoint(substance);
   const found: BoundaryOnIsobar[] = [];
   if (pressurePa < triple.pressurePa) {
-    found.push({ boundary: "sublimation", temperatureK: saturationTemperature(substance, pressurePa) });
+    if (substance.curves.sublimation) {
+      found.push({ boundary: "sublimation", temperatureK: saturationTemperature(substance, pressurePa) });
+    }
     return found;
   }
-  found.push({ boundary: "melting", temperatureK: meltingTemperature(substance, pressurePa) });
+  // Substances without a published melting curve have no melting temperature to offer here; the
+  // phase map and the enthalpy models refuse the states that would need one.
+  if (substance.curves.melting.length > 0) {
+    found.push({ boundary: "melting", temperatureK: meltingTemperature(substance, pressurePa) });
+  }
   if (pressurePa < critical.pressurePa) {
     found.push({ boundary: "boiling", temperatureK: saturationTemperature(substance, pressurePa) });
   }
@@ -52,8 +58,17 @@ export function marginToBoundary(
   pressurePa: number,
 ): { marginK: number; boundary: Boundary; boundaryK: number } {
   checkTemperature(temperatureK);
-  phaseAt(substance, temperatureK, pressurePa);
+  const state = phaseAt(substance, temperatureK, pressurePa);
   const candidates = boundariesOnIsobar(substance, pressurePa);
+  const meltingMissing = substance.curves.melting.length === 0 && pressurePa >= triplePoint(substance).pressurePa;
+  if (candidates.length === 0 || (state.phase === "solid" && meltingMissing)) {
+    throw new NoSuchStateError([
+      `no phase boundary of ${substance.name} is known on the `,
+      q.p(pressurePa),
+      " isobar next to this state: no melting curve is published in Phasecell's sources " +
+        "(PHASE.SOURCE with \"state\")",
+    ]);
+  }
   let best = candidates[0]!;
   for (const candidate of candidates) {
     if (Math.abs(temperatureK - candidate.temperatureK) < Math.abs(temperatureK - best.temperatureK)) best = candidate;

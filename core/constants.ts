@@ -26,6 +26,7 @@ export const CONSTANT_CATALOG: readonly ConstantEntry[] = [
   { key: "criticalDensity", symbol: "rhoc", label: "critical density", names: ["ρc", "Dc"], dimension: "density" },
   { key: "normalBoilingPoint", symbol: "Tb", label: "normal boiling point (101.325 kPa)", names: ["normal boiling point", "boiling point", "NBP"], dimension: "temperature" },
   { key: "normalMeltingPoint", symbol: "Tm", label: "normal melting point (101.325 kPa)", names: ["normal melting point", "melting point", "freezing point"], dimension: "temperature" },
+  { key: "normalSublimationPoint", symbol: "Tsub", label: "normal sublimation point (101.325 kPa)", names: ["normal sublimation point", "sublimation point"], dimension: "temperature" },
   { key: "molarMass", symbol: "M", label: "molar mass", names: ["molar mass", "molecular weight", "MW"], dimension: "molarMass" },
   { key: "acentricFactor", symbol: "omega", label: "acentric factor", names: ["acentric factor", "ω", "w"], dimension: "dimensionless" },
   { key: "enthalpyOfFusion", symbol: "Hfus", label: "enthalpy of fusion (at the triple point)", names: ["enthalpy of fusion", "heat of fusion", "latent heat of fusion", "ΔHfus", "dHfus"], dimension: "specificEnergy" },
@@ -62,6 +63,14 @@ export function constantOf(substance: SubstanceDefinition, name: string): Resolv
   const entry = findEntry(name);
   const value = substance.constants[entry.key];
   if (!value) {
+    const triple = substance.constants.triplePressure?.value;
+    if (entry.key === "normalBoilingPoint" && triple !== undefined && triple > 101325) {
+      throw new NoSuchStateError([
+        `${substance.name} has no normal boiling point: its triple-point pressure is above one ` +
+          "standard atmosphere, so at 101.325 kPa the solid sublimes (PHASE.CONSTANT with \"Tsub\", " +
+          "or PHASE.SATTEMP at that pressure)",
+      ]);
+    }
     throw new NoSuchStateError([`no ${entry.label} is recorded for ${substance.name}`]);
   }
   return { ...value, entry };

@@ -6,6 +6,7 @@
  * check. SI in (K, Pa), SI out; errors are typed (see core/errors).
  */
 import {
+  atLeast,
   atMost,
   branchCoversPressure,
   branchCoversTemperature,
@@ -33,12 +34,29 @@ export interface PhaseState {
   readonly branch?: CurveBranch;
 }
 
-/** Triple point (T, p) of a substance. */
-export function triplePoint(substance: SubstanceDefinition): { temperatureK: number; pressurePa: number } {
+/** Triple point (T, p) of a substance, or undefined for one without (helium-4). */
+function triplePointIfAny(substance: SubstanceDefinition): { temperatureK: number; pressurePa: number } | undefined {
   const tt = substance.constants.tripleTemperature;
   const pt = substance.constants.triplePressure;
-  if (!tt || !pt) throw new Error(`${substance.id} lacks a triple point`);
+  if (!tt || !pt) {
+    if (substance.noTriplePoint === undefined) throw new Error(`${substance.id} lacks a triple point`);
+    return undefined;
+  }
   return { temperatureK: tt.value, pressurePa: pt.value };
+}
+
+/**
+ * Triple point (T, p) of a substance.
+ * @throws NoSuchStateError for a substance without one (helium-4), saying why.
+ */
+export function triplePoint(substance: SubstanceDefinition): { temperatureK: number; pressurePa: number } {
+  const triple = triplePointIfAny(substance);
+  if (!triple) {
+    throw new NoSuchStateError([
+      `${substance.name} has no solid–liquid–vapor triple point: ${substance.noTriplePoint ?? ""}`,
+    ]);
+  }
+  return triple;
 }
 
 /** Critical point (T, p) of a substance. */
@@ -63,7 +81,7 @@ function requireSublimation(substance: SubstanceDefinition): CurveBranch {
  */
 export function saturationPressure(substance: SubstanceDefinition, temperatureK: number): number {
   checkTemperature(temperatureK);
-  const triple = triplePoint(substance);
+  const triple = triplePointIfAny(substance);
   const critical = criticalPoint(substance);
   if (!atMost(temperatureK, critical.temperatureK)) {
     throw new NoSuchStateError([
@@ -74,7 +92,7 @@ export function saturationPressure(substance: SubstanceDefinition, temperatureK:
       "): liquid and vapor no longer coexist; the fluid is gas or supercritical fluid (PHASE.STATE)",
     ]);
   }
-  if (temperatureK >= triple.temperatureK) {
+  if (!triple || temperatureK >= triple.temperatureK) {
     return pressureOnBranch(substance.curves.boiling, temperatureK, substance.name);
   }
   return pressureOnBranch(requireSublimation(substance), temperatureK, substance.name);
@@ -86,7 +104,7 @@ export function saturationPressure(substance: SubstanceDefinition, temperatureK:
  */
 export function saturationTemperature(substance: SubstanceDefinition, pressurePa: number): number {
   checkPressure(pressurePa);
-  const triple = triplePoint(substance);
+  const triple = triplePointIfAny(substance);
   const critical = criticalPoint(substance);
   // The boiling equation may end a rounding hair above p_c (see its pressure range).
   if (pressurePa > Math.max(critical.pressurePa, branchPressureRange(substance.curves.boiling)[1])) {
@@ -98,7 +116,7 @@ export function saturationTemperature(substance: SubstanceDefinition, pressurePa
       "): there is no boiling; liquid turns into supercritical fluid without a phase change",
     ]);
   }
-  if (pressurePa > triple.pressurePa) {
+  if (!triple || pressurePa > triple.pressurePa) {
     return temperatureOnBranch(substance.curves.boiling, pressurePa, substance.name);
   }
   return temperatureOnBranch(requireSublimation(substance), pressurePa, substance.name);
@@ -114,7 +132,14 @@ function meltingPressureCeiling(substance: SubstanceDefinition): number {
  * melting curve: the triple point is the only known point of its melting line.
  */
 function noMeltingCurve(substance: SubstanceDefinition): NoSuchStateError {
-  const triple = triplePoint(substance);
+  const triple = triplePointIfAny(substance);
+  if (!triple) {
+    return new NoSuchStateError([
+      `no melting curve is published for ${substance.name} in Phasecell's sources (it has no ` +
+        `triple point: ${substance.noTriplePoint ?? ""}); PHASE.SOURCE with "state" explains what ` +
+        "the phase map assumes",
+    ]);
+  }
   return new NoSuchStateError([
     `no melting curve is published for ${substance.name} in Phasecell's sources: the only known ` +
       "point of its melting line is the triple point (",
@@ -143,11 +168,15 @@ function meltingBoundOf(substance: SubstanceDefinition): MeltingBound {
  */
 function phaseWithoutMeltingCurve(substance: SubstanceDefinition, temperatureK: number, pressurePa: number): PhaseState {
   const bound = meltingBoundOf(substance);
-  if (temperatureK === bound.anchorK && pressurePa === bound.anchorPa) {
+  if (bound.fluidBelowPa !== undefined && pressurePa < bound.fluidBelowPa) {
+    return fluidState(substance, temperatureK, pressurePa);
+  }
+  const solidBelowAnchor = bound.solidBelowAnchor ?? true;
+  if (solidBelowAnchor && temperatureK === bound.anchorK && pressurePa === bound.anchorPa) {
     return { phase: "solid + liquid", detail: "solid + liquid" };
   }
-  if (temperatureK <= bound.anchorK) return { phase: "solid", detail: "solid" };
-  const warmestSolidK = bound.anchorK + bound.maxSlope * (pressurePa - bound.anchorPa);
+  if (solidBelowAnchor && temperatureK <= bound.anchorK) return { phase: "solid", detail: "solid" };
+  const warmestSolidK = bound.anchorK + bound.maxSlope * Math.max(0, pressurePa - bound.anchorPa);
   if (temperatureK <= warmestSolidK) {
     throw new OutOfRangeError([
       "temperature ",
@@ -155,12 +184,11 @@ function phaseWithoutMeltingCurve(substance: SubstanceDefinition, temperatureK: 
       " at ",
       q.p(pressurePa),
       ` may lie on either side of the melting line of ${substance.name}: no melting curve is ` +
-        "published in Phasecell's sources, and between the triple-point temperature (",
-      q.T(bound.anchorK),
-      ") and ",
+        `published in Phasecell's sources, and ${solidBelowAnchor ? "between the triple-point temperature (" : "below "}`,
+      ...(solidBelowAnchor ? [q.T(bound.anchorK), ") and "] : []),
       q.T(warmestSolidK),
-      ` at this pressure ${substance.name} may be solid or liquid (${bound.basis}); states ` +
-        "colder than the triple point are solid, warmer than the upper limit fluid",
+      ` at this pressure ${substance.name} may be solid or liquid (${bound.basis}); ` +
+        (solidBelowAnchor ? "states colder than the triple point are solid, warmer than the upper limit fluid" : "warmer states are fluid"),
     ]);
   }
   return fluidState(substance, temperatureK, pressurePa);
@@ -180,7 +208,8 @@ interface MeltingBand {
  * equations share, which is exact to the equations' own mismatch.
  */
 function meltingBandAt(substance: SubstanceDefinition, pressurePa: number): MeltingBand {
-  const triple = triplePoint(substance);
+  const triple = triplePointIfAny(substance);
+  if (!triple) throw noMeltingCurve(substance);
   if (pressurePa < triple.pressurePa) {
     throw new NoSuchStateError([
       "pressure ",
@@ -309,7 +338,8 @@ export function phaseAt(substance: SubstanceDefinition, temperatureK: number, pr
   checkTemperature(temperatureK);
   checkPressure(pressurePa);
   checkTemperatureCoverage(substance, temperatureK);
-  const triple = triplePoint(substance);
+  const triple = triplePointIfAny(substance);
+  if (!triple) return phaseWithoutTriplePoint(substance, temperatureK, pressurePa);
   const critical = criticalPoint(substance);
 
   if (pressurePa < triple.pressurePa) {
@@ -344,6 +374,26 @@ export function phaseAt(substance: SubstanceDefinition, temperatureK: number, pr
   if (side === 0) return { phase: "solid + liquid", detail: `${solid} + liquid`, branch: band.branch };
   if (temperatureK >= critical.temperatureK) return fluidState(substance, temperatureK, pressurePa);
   if (temperatureK < triple.temperatureK) return { phase: "liquid", detail: "compressed liquid" };
+  return fluidState(substance, temperatureK, pressurePa);
+}
+
+/**
+ * The phase of a substance without a triple point (helium-4): fluid wherever the melting bound
+ * allows, decided by its boiling curve and critical point; nothing below the boiling curve's
+ * lowest temperature.
+ */
+function phaseWithoutTriplePoint(substance: SubstanceDefinition, temperatureK: number, pressurePa: number): PhaseState {
+  const boiling = substance.curves.boiling;
+  if (!atLeast(temperatureK, boiling.tMin)) {
+    throw new OutOfRangeError([
+      "temperature ",
+      q.T(temperatureK),
+      ` is below the lowest temperature Phasecell covers for ${substance.name} (`,
+      q.T(boiling.tMin),
+      `, the ${branchLabel(boiling)}'s range, ${citation(boiling.model.source).short})`,
+    ]);
+  }
+  if (substance.curves.melting.length === 0) return phaseWithoutMeltingCurve(substance, temperatureK, pressurePa);
   return fluidState(substance, temperatureK, pressurePa);
 }
 

@@ -63,6 +63,19 @@ export function provenanceRows(substance: SubstanceDefinition): ProvenanceRow[] 
   ];
   if (substance.curves.sublimation) rows.push(branchRow(substance.curves.sublimation));
   for (const branch of substance.curves.melting) rows.push(branchRow(branch));
+  if (substance.curves.melting.length === 0) {
+    rows.push({
+      quantity: "melting curve",
+      model: "none published in Phasecell's sources",
+      grade: substance.grade,
+      source: "",
+      validity: substance.meltingBound
+        ? `states are decided only outside the band the bound leaves open (${substance.meltingBound.basis})`
+        : "",
+      uncertainty: "MELTTEMP and MELTPRESSURE return #N/A",
+      keys: ["melting", "melting curve", "melttemp", "meltpressure"],
+    });
+  }
   for (const model of substance.enthalpy?.models ?? []) {
     rows.push(
       modelRow("enthalpy", model, ["enthalpy", "path", "pathenergy", "endstate", "latentheat", "latent heat", "energy", model.id]),

@@ -5,10 +5,12 @@
 import { BadInputError } from "../errors";
 import { foldName, nearestNames } from "../names";
 import type { SubstanceDefinition } from "./types";
+import { co2 } from "./co2";
+import { ENGINEERING_SUBSTANCES } from "./engineering-library";
 import { water } from "./water";
 
 /** Every substance, in the order the substance list shows them. */
-export const SUBSTANCES: readonly SubstanceDefinition[] = [water];
+export const SUBSTANCES: readonly SubstanceDefinition[] = [water, co2, ...ENGINEERING_SUBSTANCES];
 
 const byAlias = new Map<string, SubstanceDefinition>();
 for (const substance of SUBSTANCES) {

@@ -55,6 +55,7 @@ export type ConstantKey =
   | "criticalDensity"
   | "normalBoilingPoint"
   | "normalMeltingPoint"
+  | "normalSublimationPoint"
   | "molarMass"
   | "specificGasConstant"
   | "acentricFactor"
@@ -113,6 +114,14 @@ export interface MeltingBound {
   readonly maxSlope: number;
   /** Why the bound holds, in words a reviewer can check. */
   readonly basis: string;
+  /**
+   * Whether a state colder than the anchor (at a higher pressure) is certainly solid: true for a
+   * triple-point anchor (the default). Helium-4, anchored at a point of its melting line, is
+   * left undecided there instead.
+   */
+  readonly solidBelowAnchor?: boolean;
+  /** Below this pressure, Pa, no solid exists at any temperature covered (helium-4). */
+  readonly fluidBelowPa?: number;
 }
 
 /** A substance: identity, constants, curves, and the model of its phase map. */
@@ -140,6 +149,12 @@ export interface SubstanceDefinition {
   };
   /** Required when `curves.melting` is empty: how far the unpublished melting line may lie. */
   readonly meltingBound?: MeltingBound;
+  /**
+   * Set, with the reason in words, for a substance without a solid–liquid–vapour triple point
+   * (helium-4): it has then no triple-point constants and no sublimation curve, and its phase
+   * map ends at the bottom of its boiling curve.
+   */
+  readonly noTriplePoint?: string;
   /** How the phase at (T, p) is decided, and what is approximate about it. */
   readonly stateModel: ModelInfo;
   readonly limits: CoverageLimits;
@@ -147,4 +162,9 @@ export interface SubstanceDefinition {
   readonly referenceState: string;
   /** Enthalpy of its phases, where modelled. */
   readonly enthalpy?: EnthalpyModel;
+  /**
+   * The substance's own hazards in a few words each (common practice), for the cautions a user
+   * sees beside its numbers; the general cautions (pressure, cryogens, local codes) still apply.
+   */
+  readonly hazards?: readonly string[];
 }

@@ -45,7 +45,10 @@ describe("water constants against their sources", () => {
 
   it("every constant carries a dimension, a note and a citation that exists", () => {
     const all = constantsOf(water);
-    expect(all.map((c) => c.entry.symbol)).toEqual(CONSTANT_CATALOG.map((c) => c.symbol));
+    // Every catalogue constant except the normal sublimation point: water's triple-point pressure
+    // (611.657 Pa) is far below one atmosphere, so at 101.325 kPa ice melts and the liquid boils
+    // (common practice).
+    expect(all.map((c) => c.entry.symbol)).toEqual(CONSTANT_CATALOG.map((c) => c.symbol).filter((s) => s !== "Tsub"));
     for (const constant of all) {
       expect(constant.dimension).toBe(constant.entry.dimension);
       expect(constant.note.length).toBeGreaterThan(0);
