@@ -157,13 +157,13 @@ export function source(substance: any, quantity?: any): any[][] {
 
 /**
  * The substances Phasecell knows, with their formula, CAS number, refrigerant number, accepted
- * names and model grade. A table with a header row.
+ * names, model grade, constants and main hazards. A table with a header row.
  * @customfunction SUBSTANCES
  * @returns Substance table.
  */
 export function substances(): any[][] {
   return table(() => [
-    ["substance", "formula", "CAS", "refrigerant", "accepted names", "grade", "constants"],
+    ["substance", "formula", "CAS", "refrigerant", "accepted names", "grade", "constants", "hazards"],
     ...SUBSTANCES.map((s) => [
       s.name,
       s.formula,
@@ -172,6 +172,7 @@ export function substances(): any[][] {
       s.aliases.join(", "),
       s.grade,
       CONSTANT_CATALOG.filter((c) => s.constants[c.key]).map((c) => c.symbol).join(" "),
+      (s.hazards ?? []).join("; "),
     ]),
   ]);
 }

@@ -234,4 +234,9 @@ export const co2: SubstanceDefinition = {
     "298.15 K and 0.101325 MPa; dry ice (Jäger & Span 2012) is placed on the same zero through " +
     "the enthalpy of melting at the triple point, 8875 J/mol",
   enthalpy: co2Enthalpy,
+  hazards: [
+    "asphyxiant, heavier than air: collects in pits, cellars and low rooms",
+    "dry ice sublimes to about 500 times its volume of gas: never seal it in a closed container or a small unventilated space",
+    "dry ice at -78.5 °C and liquid released from pressure cause cold burns; liquid let down below 5.18 bar turns to solid and gas",
+  ],
 };

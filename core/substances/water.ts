@@ -210,4 +210,8 @@ export const water: SubstanceDefinition = {
   referenceState:
     "IAPWS: internal energy and entropy of the saturated liquid at the triple point are zero",
   enthalpy: waterEnthalpy,
+  hazards: [
+    "steam and hot water scald; hot water let down to a lower pressure flashes to steam",
+    "liquid trapped between closed valves and heated builds pressure fast",
+  ],
 };

@@ -22,7 +22,10 @@ const ROOT = join(__dirname, "..", "..");
 const DIST = join(ROOT, "dist");
 
 /** Ids shipped in functions.json. An id is permanent once shipped (saved workbooks store it). */
-const SHIPPED_IDS = ["STATE", "SATPRESSURE", "SATTEMP", "MELTTEMP", "MELTPRESSURE", "CONSTANT", "SOURCE", "SUBSTANCES"];
+const SHIPPED_IDS = [
+  "STATE", "SATPRESSURE", "SATTEMP", "MELTTEMP", "MELTPRESSURE", "CONSTANT", "SOURCE", "SUBSTANCES",
+  "PATHENERGY", "PATH", "ENDSTATE", "ENTHALPY", "LATENTHEAT", "MARGIN", "SLOPE", "CROSSINGS",
+];
 
 /**
  * Half a unit in the last printed digit of a published value: the tolerance for "agrees with

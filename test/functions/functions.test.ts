@@ -207,7 +207,7 @@ describe("errors a user can cause", () => {
 describe("tables", () => {
   it("SUBSTANCES lists water with its identity and grade", () => {
     const rows = f.substances() as string[][];
-    expect(rows[0]).toEqual(["substance", "formula", "CAS", "refrigerant", "accepted names", "grade", "constants"]);
+    expect(rows[0]).toEqual(["substance", "formula", "CAS", "refrigerant", "accepted names", "grade", "constants", "hazards"]);
     expect(rows[1]!.slice(0, 4)).toEqual(["water", "H2O", "7732-18-5", "R-718"]);
     expect(rows[1]![5]).toBe("reference");
   });
