@@ -50,11 +50,19 @@ export function evaluate(
   return result;
 }
 
-/** Runs a table-producing computation, converting any failure into an Excel error value. */
-export function table(compute: () => (string | number)[][]): (string | number)[][] {
+/**
+ * Runs a table-producing computation with the call's units, converting any failure into an
+ * Excel error value whose message speaks those units.
+ */
+export function table(
+  unitsArgument: unknown,
+  compute: (units: UnitSystem) => (string | number)[][],
+): (string | number)[][] {
+  let units: UnitSystem = SI;
   try {
-    return compute();
+    units = readUnits(unitsArgument);
+    return compute(units);
   } catch (error) {
-    throw toExcelError(error);
+    throw toExcelError(error, units);
   }
 }

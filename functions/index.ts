@@ -17,9 +17,8 @@ import type { SubstanceDefinition } from "../core/substances/types";
 import { PROVENANCE_HEADER, provenanceFor } from "../core/sources/provenance";
 import { findSubstance, SUBSTANCES } from "../core/substances/registry";
 import { fromSI, toSI } from "../core/units/units";
-import { readFlag, readNumber, readOptionalText, readText, readUnits, singleCell, substanceReader } from "./coerce";
+import { readFlag, readNumber, readOptionalText, readText, singleCell, substanceReader } from "./coerce";
 import { evaluate, table } from "./evaluate";
-import { toExcelError } from "./excel-error";
 
 /**
  * Phase of a pure substance at a temperature and pressure: solid, liquid, vapor, gas (above Tc,
@@ -145,7 +144,7 @@ export function constant(substance: any[][], name: any[][], units?: any): any[][
  * @returns Provenance table.
  */
 export function source(substance: any, quantity?: any): any[][] {
-  return table(() => {
+  return table(null, () => {
     const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
     const rows = provenanceFor(found, readOptionalText(singleCell(quantity ?? null, "quantity"), "quantity"));
     return [
@@ -162,7 +161,7 @@ export function source(substance: any, quantity?: any): any[][] {
  * @returns Substance table.
  */
 export function substances(): any[][] {
-  return table(() => [
+  return table(null, () => [
     ["substance", "formula", "CAS", "refrigerant", "accepted names", "grade", "constants", "hazards"],
     ...SUBSTANCES.map((s) => [
       s.name,
@@ -230,34 +229,29 @@ export function slope(substance: any[][], boundary: any[][], temperature: any[][
  * @returns Table of crossings.
  */
 export function crossings(substance: any, t1: any, p1: any, t2: any, p2: any, units?: any): any[][] {
-  return table(() => {
-    const system = readUnits(units);
-    try {
-      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
-      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
-      const startPa = toSI(system, "pressure", readNumber(singleCell(p1, "P1"), "P1"));
-      const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
-      const endPa = toSI(system, "pressure", readNumber(singleCell(p2, "P2"), "P2"));
-      const found2 = crossingsAlongPath(found, startK, startPa, endK, endPa);
-      const header = ["change", "temperature", "pressure", "from", "to", "fraction of path"];
-      if (found2.length === 0) {
-        const only = phaseAt(found, startK, startPa).phase;
-        return [header, ["no phase change", "", "", only, only, ""]];
-      }
-      return [
-        header,
-        ...found2.map((c) => [
-          c.change,
-          fromSI(system, "temperature", c.temperatureK),
-          fromSI(system, "pressure", c.pressurePa),
-          c.from.phase === "solid" ? c.from.detail : c.from.phase,
-          c.to.phase === "solid" ? c.to.detail : c.to.phase,
-          c.fraction,
-        ]),
-      ];
-    } catch (error) {
-      throw toExcelError(error, system);
+  return table(units, (system) => {
+    const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+    const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+    const startPa = toSI(system, "pressure", readNumber(singleCell(p1, "P1"), "P1"));
+    const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
+    const endPa = toSI(system, "pressure", readNumber(singleCell(p2, "P2"), "P2"));
+    const found2 = crossingsAlongPath(found, startK, startPa, endK, endPa);
+    const header = ["change", "temperature", "pressure", "from", "to", "fraction of path"];
+    if (found2.length === 0) {
+      const only = phaseAt(found, startK, startPa).phase;
+      return [header, ["no phase change", "", "", only, only, ""]];
     }
+    return [
+      header,
+      ...found2.map((c) => [
+        c.change,
+        fromSI(system, "temperature", c.temperatureK),
+        fromSI(system, "pressure", c.pressurePa),
+        c.from.phase === "solid" ? c.from.detail : c.from.phase,
+        c.to.phase === "solid" ? c.to.detail : c.to.phase,
+        c.fraction,
+      ]),
+    ];
   });
 }
 
@@ -305,33 +299,28 @@ export function pathEnergyFn(substance: any[][], mass: any[][], t1: any[][], t2:
  * @returns Step table.
  */
 export function path(substance: any, mass: any, t1: any, t2: any, pressure: any, units?: any): any[][] {
-  return table(() => {
-    const system = readUnits(units);
-    try {
-      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
-      const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
-      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
-      const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
-      const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
-      const steps = isobaricPath(found, massKg, startK, endK, pressurePa);
-      const rows: (string | number)[][] = [["step", "what happens", "from", "to", "energy", "running total"]];
-      let total = 0;
-      steps.forEach((step, index) => {
-        total += step.energyJ;
-        rows.push([
-          index + 1,
-          step.action,
-          fromSI(system, "temperature", step.fromK),
-          fromSI(system, "temperature", step.toK),
-          fromSI(system, "energy", step.energyJ),
-          fromSI(system, "energy", total),
-        ]);
-      });
-      if (steps.length === 0) rows.push([0, "no change (T1 equals T2)", fromSI(system, "temperature", startK), fromSI(system, "temperature", endK), 0, 0]);
-      return rows;
-    } catch (error) {
-      throw toExcelError(error, system);
-    }
+  return table(units, (system) => {
+    const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+    const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
+    const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+    const endK = toSI(system, "temperature", readNumber(singleCell(t2, "T2"), "T2"));
+    const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
+    const steps = isobaricPath(found, massKg, startK, endK, pressurePa);
+    const rows: (string | number)[][] = [["step", "what happens", "from", "to", "energy", "running total"]];
+    let total = 0;
+    steps.forEach((step, index) => {
+      total += step.energyJ;
+      rows.push([
+        index + 1,
+        step.action,
+        fromSI(system, "temperature", step.fromK),
+        fromSI(system, "temperature", step.toK),
+        fromSI(system, "energy", step.energyJ),
+        fromSI(system, "energy", total),
+      ]);
+    });
+    if (steps.length === 0) rows.push([0, "no change (T1 equals T2)", fromSI(system, "temperature", startK), fromSI(system, "temperature", endK), 0, 0]);
+    return rows;
   });
 }
 
@@ -349,19 +338,14 @@ export function path(substance: any, mass: any, t1: any, t2: any, pressure: any,
  * @returns One row: final temperature, final state, converted fraction (blank outside a phase change).
  */
 export function endStateFn(substance: any, mass: any, t1: any, heat: any, pressure: any, units?: any): any[][] {
-  return table(() => {
-    const system = readUnits(units);
-    try {
-      const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
-      const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
-      const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
-      const heatJ = toSI(system, "energy", readNumber(singleCell(heat, "heat"), "heat"));
-      const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
-      const result = endState(found, massKg, startK, heatJ, pressurePa);
-      return [[fromSI(system, "temperature", result.temperatureK), result.state, result.convertedFraction ?? ""]];
-    } catch (error) {
-      throw toExcelError(error, system);
-    }
+  return table(units, (system) => {
+    const found = findSubstance(readText(singleCell(substance, "substance"), "substance"));
+    const massKg = toSI(system, "mass", readNumber(singleCell(mass, "mass"), "mass"), found.constants.molarMass?.value);
+    const startK = toSI(system, "temperature", readNumber(singleCell(t1, "T1"), "T1"));
+    const heatJ = toSI(system, "energy", readNumber(singleCell(heat, "heat"), "heat"));
+    const pressurePa = toSI(system, "pressure", readNumber(singleCell(pressure, "pressure"), "pressure"));
+    const result = endState(found, massKg, startK, heatJ, pressurePa);
+    return [[fromSI(system, "temperature", result.temperatureK), result.state, result.convertedFraction ?? ""]];
   });
 }
 
