@@ -38,7 +38,12 @@ export interface PathStep {
 
 function requireEnthalpy(substance: SubstanceDefinition): EnthalpyModel {
   if (!substance.enthalpy) {
-    throw new NoSuchStateError([`no enthalpy model is available for ${substance.name} yet`]);
+    const prefix = "no enthalpy model: ";
+    const why = substance.referenceState.startsWith(prefix) ? ` (${substance.referenceState.slice(prefix.length)})` : "";
+    throw new NoSuchStateError([
+      `no enthalpy model is available for ${substance.name}${why}, so its path energies, end ` +
+        "states, enthalpies and latent heats cannot be computed; its phase, curves and constants can",
+    ]);
   }
   return substance.enthalpy;
 }
