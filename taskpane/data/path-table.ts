@@ -117,7 +117,7 @@ export function chartFromTable(values: readonly (readonly unknown[])[], units: s
 }
 
 /** Splits the argument list of a call at top-level commas, keeping quoted text and nested calls whole. */
-function splitArguments(text: string): string[] | null {
+export function splitArguments(text: string): string[] | null {
   const parts: string[] = [];
   let depth = 0;
   let quoted = false;
