@@ -1,8 +1,9 @@
 /**
  * Puts the pane together: heading, outside-Excel notice, selectors, cautions, the heating and
- * cooling path, and the reference section, which is rebuilt whenever the substance or the display
- * units change. Knows nothing of Office: the entry point tells it the host once office.js has
- * answered, and hands it what the workbook's selection holds.
+ * cooling path, the reference section, which is rebuilt whenever the substance or the display
+ * units change, and the phase diagram with the user's state points. Knows nothing of Office: the
+ * entry point tells it the host once office.js has answered, and hands it what the workbook's
+ * selection holds.
  */
 import { SUBSTANCES } from "../core/substances/registry";
 import type { SubstanceDefinition } from "../core/substances/types";
@@ -10,6 +11,7 @@ import { DISPLAY_UNITS, displayUnitsById, type DisplayUnits } from "./data/displ
 import type { SelectionView } from "./data/path-table";
 import { referenceData } from "./data/rows";
 import { createPathSection } from "./path-section";
+import { createPhaseDiagramSection } from "./phase-diagram-section";
 import { renderCautions } from "./render/cautions";
 import { renderConstantsTable } from "./render/constants-table";
 import { renderControls } from "./render/controls";
@@ -48,7 +50,7 @@ function renderReference(doc: Document, substance: SubstanceDefinition, units: D
         el(doc, "code", {}, [`"${units.unitsText}"`]),
         " gives these values.",
       ]),
-      renderConstantsTable(doc, data.constants, `Constants of ${summary.name}, ${units.label}`),
+      renderConstantsTable(doc, data.constants, `Constants of ${summary.name}, ${units.label}`, summary.name),
     ]),
     el(doc, "section", { "aria-labelledby": "curves-title" }, [
       el(doc, "h2", { id: "curves-title" }, ["Coexistence curves"]),
@@ -70,12 +72,14 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
   const noticeSlot = el(doc, "div", { class: "notice-slot" });
   const referenceSlot = el(doc, "div", { class: "reference-slot" });
   const path = createPathSection(doc, substance, units);
+  const diagram = createPhaseDiagramSection(doc, substance, units);
   const renderReferenceSlot = (): void => {
     referenceSlot.replaceChildren(renderReference(doc, substance, units));
   };
   const rerender = (): void => {
     renderReferenceSlot();
     path.setContext(substance, units);
+    diagram.setContext(substance, units);
   };
   root.replaceChildren(
     el(doc, "header", { class: "pane-header" }, [
@@ -100,6 +104,7 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
     renderCautions(doc),
     path.element,
     referenceSlot,
+    diagram.element,
   );
   renderReferenceSlot();
   return {

@@ -5,11 +5,17 @@
  * full reference. Two columns so that labels and numbers stay readable at 320 px.
  */
 import type { ConstantRow } from "../data/rows";
+import { constantWithCitation } from "../data/substance-search";
 import { citationButton, citationDetail } from "./citation";
 import { el, idPart } from "./dom";
 
 /** Renders the constants of one substance; `caption` names the substance and units. */
-export function renderConstantsTable(doc: Document, rows: readonly ConstantRow[], caption: string): HTMLTableElement {
+export function renderConstantsTable(
+  doc: Document,
+  rows: readonly ConstantRow[],
+  caption: string,
+  substanceName = "",
+): HTMLTableElement {
   const body = el(doc, "tbody");
   for (const row of rows) {
     const detailId = `constant-detail-${idPart(row.key)}`;
@@ -35,6 +41,7 @@ export function renderConstantsTable(doc: Document, rows: readonly ConstantRow[]
             el(doc, "p", { class: "stored" }, [
               `Stored value ${String(row.quantity.si)} ${row.quantity.siUnit}: ${row.note}.`,
             ]),
+            copyButton(doc, constantWithCitation(substanceName || caption, row)),
           ]),
         ]),
       ]),
@@ -50,4 +57,36 @@ export function renderConstantsTable(doc: Document, rows: readonly ConstantRow[]
     ]),
     body,
   ]);
+}
+
+/**
+ * A button that copies a constant with its citation, for a report or a reviewer's note. The
+ * clipboard API may be missing or refused inside Office; the text is then selected in a field
+ * beside the button so that Ctrl+C copies it.
+ */
+function copyButton(doc: Document, text: string): HTMLElement {
+  const button = el(doc, "button", { type: "button", class: "copy" }, ["Copy with citation"]);
+  const status = el(doc, "span", { class: "copy-status", role: "status" });
+  const fallback = el(doc, "textarea", { class: "copy-text", readonly: true, rows: "3", "aria-label": "constant with citation", hidden: true });
+  fallback.value = text;
+  button.addEventListener("click", () => {
+    const showFallback = (): void => {
+      fallback.hidden = false;
+      fallback.focus();
+      fallback.select();
+      status.textContent = "Selected: press Ctrl+C (Cmd+C) to copy.";
+    };
+    const clipboard = doc.defaultView?.navigator.clipboard;
+    if (!clipboard) {
+      showFallback();
+      return;
+    }
+    clipboard.writeText(text).then(
+      () => {
+        status.textContent = "Copied.";
+      },
+      showFallback,
+    );
+  });
+  return el(doc, "p", { class: "copy-row" }, [button, " ", status, fallback]);
 }

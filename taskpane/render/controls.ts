@@ -4,6 +4,7 @@
  */
 import type { SubstanceDefinition } from "../../core/substances/types";
 import type { DisplayUnits } from "../data/display-units";
+import { resolveSubstance, searchNames } from "../data/substance-search";
 import { el } from "./dom";
 
 /** What the selectors start at and whom they tell about a change. */
@@ -39,8 +40,46 @@ export function renderControls(doc: Document, options: ControlsOptions): HTMLEle
     options.units.map((u) => el(doc, "option", { value: u.id, selected: u.id === options.unitsId }, [u.label])),
   );
   units.addEventListener("change", () => options.onUnits(units.value));
-  return el(doc, "div", { class: "controls" }, [
-    field(doc, "substance-select", "Substance", substance),
-    field(doc, "units-select", "Display units", units),
+  return el(doc, "div", { class: "controls-block" }, [
+    renderSearch(doc, substance, options.onSubstance),
+    el(doc, "div", { class: "controls" }, [
+      field(doc, "substance-select", "Substance", substance),
+      field(doc, "units-select", "Display units", units),
+    ]),
+  ]);
+}
+
+/**
+ * A search field that takes any name a cell function accepts (name, formula, CAS number,
+ * refrigerant number) and picks that substance in the selector; an unknown name gets the core's
+ * message with the nearest names.
+ */
+function renderSearch(doc: Document, select: HTMLSelectElement, onSubstance: (id: string) => void): HTMLElement {
+  const input = el(doc, "input", {
+    type: "search",
+    id: "substance-search",
+    list: "substance-names",
+    autocomplete: "off",
+    spellcheck: "false",
+    "aria-describedby": "substance-search-message",
+  });
+  const names = el(doc, "datalist", { id: "substance-names" }, searchNames().map((name) => el(doc, "option", { value: name })));
+  const message = el(doc, "p", { id: "substance-search-message", class: "search-message", role: "status" });
+  input.addEventListener("change", () => {
+    if (input.value.trim() === "") return;
+    const found = resolveSubstance(input.value);
+    if ("id" in found) {
+      message.textContent = "";
+      select.value = found.id;
+      onSubstance(found.id);
+    } else {
+      message.textContent = found.message;
+    }
+  });
+  return el(doc, "div", { class: "field search" }, [
+    el(doc, "label", { for: "substance-search" }, ["Find a substance (name, formula, CAS or R-number)"]),
+    input,
+    names,
+    message,
   ]);
 }

@@ -17,6 +17,7 @@ import { chromium, type Browser, type BrowserContext, type Page } from "playwrig
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { constantOf } from "../../core/constants";
 import { formatNumber } from "../../core/errors";
+import { criticalPoint, phaseAt, triplePoint } from "../../core/phase";
 import { isobaricPath, pathEnergy } from "../../core/path";
 import { findSubstance, SUBSTANCES } from "../../core/substances/registry";
 import { fromSI, toSI } from "../../core/units/units";
@@ -291,6 +292,46 @@ if (!HAVE_CHROMIUM) {
       expect(options).toEqual(SUBSTANCES.map((s) => s.id));
     });
 
+    it("finds a second substance by its refrigerant number and shows its constants as core gives them", async () => {
+      await page.selectOption("#units-select", "si");
+      await page.locator('.reference-data[data-units="si"]').waitFor();
+      try {
+        await page.fill("#substance-search", "R-744");
+        await page.press("#substance-search", "Enter");
+        const co2 = findSubstance("R-744");
+        expect(await page.locator("#substance-select").inputValue()).toBe(co2.id);
+        // Span & Wagner (1996): Tc = 304.1282 K, pc = 7.3773 MPa, Tt = 216.592 K, pt = 0.51795 MPa.
+        const published: Record<string, number> = { Tc: 304.1282, Pc: 7.3773e6, Tt: 216.592, Pt: 0.51795e6 };
+        for (const symbol of ["Tc", "Pc", "Tt", "Pt"]) {
+          const row = page.locator(`tr.constant[data-symbol="${symbol}"]`);
+          await row.waitFor();
+          const constant = constantOf(co2, symbol);
+          expect(constant.value, symbol).toBe(published[symbol]);
+          expect(await row.locator(".value").textContent(), symbol).toBe(formatNumber(constant.value));
+        }
+        await page.fill("#substance-search", "nitrogn");
+        await page.press("#substance-search", "Enter");
+        expect(await page.locator("#substance-search-message").textContent()).toMatch(/unknown substance "nitrogn".*"nitrogen"/);
+      } finally {
+        await page.fill("#substance-search", "7732-18-5");
+        await page.press("#substance-search", "Enter");
+        await page.fill("#substance-search", "");
+      }
+      expect(await page.locator("#substance-select").inputValue()).toBe("water");
+    });
+
+    it("copies a constant with its citation, or selects the text to copy where the clipboard is refused", async () => {
+      await page.locator('tr.constant[data-symbol="Tc"] button[aria-controls]').click();
+      const detail = page.locator("#constant-detail-criticalTemperature");
+      await detail.locator("button.copy").click();
+      await page.waitForFunction(() => (document.querySelector("#constant-detail-criticalTemperature .copy-status")?.textContent ?? "") !== "");
+      expect(await detail.locator(".copy-status").textContent()).toMatch(/^(Copied\.|Selected: press Ctrl\+C)/);
+      const copied = await detail.locator("textarea.copy-text").inputValue();
+      // IAPWS-IF97 Eq. (2): Tc = 647.096 K.
+      expect(copied).toMatch(/^water, critical temperature \(Tc\) = 647\.096 K\. Source: IAPWS.*doi:10\.1115\/1\.483186/);
+      await page.locator('tr.constant[data-symbol="Tc"] button[aria-controls]').click();
+    });
+
     for (const units of DISPLAY_UNITS) {
       it(`shows Tc, Pc, Tt and Pt as core gives them in ${units.label}`, async () => {
         await page.selectOption("#units-select", units.id);
@@ -444,9 +485,11 @@ if (!HAVE_CHROMIUM) {
       await page.setViewportSize({ width: 350, height: 700 });
     });
 
-    it("is keyboard operable: selectors first, then the path inputs, then a source opens its full reference", async () => {
+    it("is keyboard operable: search and selectors first, then the path inputs, then a source opens its full reference", async () => {
       await page.locator("body").click({ position: { x: 1, y: 1 } });
       await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+      await page.keyboard.press("Tab");
+      expect(await page.evaluate(() => document.activeElement?.id)).toBe("substance-search");
       await page.keyboard.press("Tab");
       expect(await page.evaluate(() => document.activeElement?.id)).toBe("substance-select");
       await page.keyboard.press("Tab");
@@ -511,6 +554,156 @@ if (!HAVE_CHROMIUM) {
       }
       await page.emulateMedia({ colorScheme: "light" });
       await page.setViewportSize({ width: 350, height: 700 });
+    });
+
+    /** Marker, state-point and tick positions of the drawn phase diagram, in its user units. */
+    const drawnDiagram = () =>
+      page.evaluate(() => {
+        const svg = document.querySelector<SVGSVGElement>("svg.phase-diagram")!;
+        const translate = (e: Element) => {
+          const m = /translate\(([-\d.e]+)[ ,]+([-\d.e]+)\)/.exec(e.getAttribute("transform") ?? "");
+          return m ? [Number(m[1]), Number(m[2])] : [Number.NaN, Number.NaN];
+        };
+        // d3 writes minus as U+2212 and groups thousands with commas.
+        const value = (e: Element) => Number((e.textContent ?? "").replace(/,/g, "").replace(/\u2212/g, "-"));
+        return {
+          zoom: svg.dataset["zoom"] ?? "",
+          markers: Object.fromEntries(
+            Array.from(svg.querySelectorAll("path.pd-marker")).map((m) => [m.getAttribute("data-marker"), translate(m)]),
+          ) as Record<string, [number, number]>,
+          states: Array.from(svg.querySelectorAll("path.pd-state")).map(translate),
+          xTicks: Array.from(svg.querySelectorAll(".pd-axis-x .tick")).map((t) => ({ at: translate(t)[0]!, value: value(t) })),
+          yTicks: Array.from(svg.querySelectorAll(".pd-axis-y .tick")).map((t) => ({ at: translate(t)[1]!, value: value(t) })),
+        };
+      });
+    type Drawn = Awaited<ReturnType<typeof drawnDiagram>>;
+    /** Where the axes' own ticks put (T, p): linear in T, logarithmic in p, from the outermost ticks. */
+    const pixelOf = (drawn: Drawn, t: number, p: number): [number, number] => {
+      const [x0, x1] = [drawn.xTicks[0]!, drawn.xTicks.at(-1)!];
+      const [y0, y1] = [drawn.yTicks[0]!, drawn.yTicks.at(-1)!];
+      return [
+        x0.at + ((t - x0.value) * (x1.at - x0.at)) / (x1.value - x0.value),
+        y0.at + ((Math.log10(p) - Math.log10(y0.value)) * (y1.at - y0.at)) / (Math.log10(y1.value) - Math.log10(y0.value)),
+      ];
+    };
+
+    for (const id of ["water", "co2"]) {
+      it(`puts the ${id} triple and critical markers where the axes put core's values, within a pixel, in every window`, async () => {
+        const substance = findSubstance(id);
+        const triple = triplePoint(substance);
+        const critical = criticalPoint(substance);
+        for (const unitsId of ["c-bar", "si", "f-psi"]) {
+          const units = displayUnitsById(unitsId);
+          await page.selectOption("#substance-select", substance.id);
+          await page.selectOption("#units-select", unitsId);
+          await page.locator(`.reference-data[data-substance="${substance.id}"][data-units="${unitsId}"]`).waitFor();
+          for (const zoom of ["full", "triple", "critical"]) {
+            await page.check(`#pd-zoom-${zoom}`);
+            const drawn = await drawnDiagram();
+            expect(drawn.zoom).toBe(zoom);
+            expect(drawn.xTicks.length).toBeGreaterThanOrEqual(2);
+            expect(drawn.yTicks.length).toBeGreaterThanOrEqual(2);
+            const expected = {
+              triple: pixelOf(drawn, fromSI(units.system, "temperature", triple.temperatureK), fromSI(units.system, "pressure", triple.pressurePa)),
+              critical: pixelOf(drawn, fromSI(units.system, "temperature", critical.temperatureK), fromSI(units.system, "pressure", critical.pressurePa)),
+            };
+            const shown = zoom === "full" ? ["triple", "critical"] : [zoom];
+            for (const kind of shown) {
+              const at = drawn.markers[kind]!;
+              expect(at, `${id} ${kind} marker in ${unitsId}, ${zoom} window`).toBeDefined();
+              expect(Math.abs(at[0] - expected[kind as "triple" | "critical"][0]), `${id} ${kind} x, ${unitsId}, ${zoom}`).toBeLessThanOrEqual(1);
+              expect(Math.abs(at[1] - expected[kind as "triple" | "critical"][1]), `${id} ${kind} y, ${unitsId}, ${zoom}`).toBeLessThanOrEqual(1);
+            }
+            // The label beside each marker gives the values as core has them, in the display units.
+            if (shown.includes("critical")) {
+              const label = await page.locator('svg.phase-diagram text[data-label="critical"]').textContent();
+              expect(label).toContain(formatNumber(fromSI(units.system, "pressure", critical.pressurePa)));
+            }
+          }
+        }
+        await page.check("#pd-zoom-full");
+      });
+    }
+
+    it("plots a typed state point with core's phase, and the window choices work from the keyboard", async () => {
+      await page.selectOption("#substance-select", "co2");
+      await page.selectOption("#units-select", "c-bar");
+      await page.locator('.reference-data[data-substance="co2"][data-units="c-bar"]').waitFor();
+      await page.check("#pd-zoom-full");
+      const co2 = findSubstance("co2");
+      // A dry-ice store at −78 °C and 1.01325 bar, and a CO2 line at 40 °C and 100 bar (demo scenario).
+      const typed = [
+        [-78, 1.01325],
+        [40, 100],
+      ] as const;
+      for (const [t, p] of typed) {
+        await page.fill("#pd-point-t", String(t));
+        await page.fill("#pd-point-p", String(p));
+        await page.locator(".pd-form button[type=submit]").click();
+      }
+      const items = await page.locator(".pd-points li").allTextContents();
+      expect(items).toHaveLength(2);
+      typed.forEach(([t, p], i) => {
+        const state = phaseAt(co2, toSI(displayUnitsById("c-bar").system, "temperature", t), p * 1e5);
+        expect(items[i]).toContain(state.phase);
+      });
+      const drawn = await drawnDiagram();
+      expect(drawn.states).toHaveLength(2);
+      typed.forEach(([t, p], i) => {
+        const expected = pixelOf(drawn, t, p);
+        expect(Math.abs(drawn.states[i]![0]! - expected[0])).toBeLessThanOrEqual(1);
+        expect(Math.abs(drawn.states[i]![1]! - expected[1])).toBeLessThanOrEqual(1);
+      });
+      // Text that is not a number is refused with a message on the field.
+      await page.fill("#pd-point-t", "cold");
+      await page.locator(".pd-form button[type=submit]").click();
+      expect(await page.getAttribute("#pd-point-t", "aria-invalid")).toBe("true");
+      expect(await page.locator("#pd-point-error").textContent()).toContain("°C");
+      // The window choices are labelled radio buttons: arrow keys move between them.
+      await page.focus("#pd-zoom-full");
+      expect(await page.evaluate(() => (document.activeElement as HTMLInputElement).labels?.[0]?.textContent)).toBe("Full range");
+      await page.keyboard.press("ArrowDown");
+      expect((await drawnDiagram()).zoom).toBe("triple");
+      await page.keyboard.press("ArrowDown");
+      expect((await drawnDiagram()).zoom).toBe("critical");
+      await page.check("#pd-zoom-full");
+    });
+
+    it("draws the phase diagram legibly at 350 and 320 px, light and dark, and notes what helium-4 lacks", async () => {
+      for (const id of ["water", "co2"]) {
+        await page.selectOption("#substance-select", id);
+        await page.selectOption("#units-select", "c-bar");
+        await page.locator(`.reference-data[data-substance="${id}"][data-units="c-bar"]`).waitFor();
+        for (const scheme of ["light", "dark"] as const) {
+          await page.emulateMedia({ colorScheme: scheme });
+          for (const width of [350, 320]) {
+            await page.setViewportSize({ width, height: 700 });
+            expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth)).toBeLessThanOrEqual(0);
+            expect(await lowContrastTexts(page, 4.5), `${id} ${scheme} at ${width} px`).toEqual([]);
+            const overflow = await page.evaluate(() => {
+              const section = document.querySelector(".pd-section")!.getBoundingClientRect();
+              // Inside the diagram, curves reach beyond the plot and are clipped: the SVG itself is measured.
+              return Array.from(document.querySelectorAll(".pd-section *"))
+                .filter((e) => !e.closest("svg.phase-diagram") || e.matches("svg.phase-diagram"))
+                .filter((e) => e.getBoundingClientRect().right > section.right + 0.5)
+                .map((e) => e.tagName);
+            });
+            expect(overflow, `${id} ${scheme} at ${width} px`).toEqual([]);
+            await page.locator(".pd-section").screenshot({ path: path.join(ARTIFACTS, `phase-diagram-${id}-${width}-${scheme}.png`) });
+          }
+        }
+      }
+      await page.emulateMedia({ colorScheme: "light" });
+      await page.setViewportSize({ width: 350, height: 700 });
+      await page.selectOption("#substance-select", "helium");
+      await page.locator('.reference-data[data-substance="helium"]').waitFor();
+      expect(await page.locator("#pd-zoom-triple").count()).toBe(0);
+      expect(await page.locator("svg.phase-diagram path.pd-marker").count()).toBe(1);
+      expect(await page.locator(".pd-notes").textContent()).toContain("no solid–liquid–vapor triple point");
+      await page.locator(".pd-section").screenshot({ path: path.join(ARTIFACTS, "phase-diagram-helium-350-light.png") });
+      await page.selectOption("#substance-select", "water");
+      await page.selectOption("#units-select", "si");
+      await page.locator('.reference-data[data-substance="water"][data-units="si"]').waitFor();
     });
 
     it("still made no outside request and broke no policy after drawing paths", () => {
