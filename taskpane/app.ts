@@ -11,6 +11,7 @@ import { DISPLAY_UNITS, displayUnitsById, type DisplayUnits } from "./data/displ
 import type { SelectionView } from "./data/path-table";
 import { referenceData } from "./data/rows";
 import { createPathSection } from "./path-section";
+import type { SelectedStatePoints } from "./office-selection";
 import { createPhaseDiagramSection } from "./phase-diagram-section";
 import { renderCautions } from "./render/cautions";
 import { renderConstantsTable } from "./render/constants-table";
@@ -26,6 +27,10 @@ export interface Pane {
   setHost(host: string | null): void;
   /** Shows what the workbook's selection holds (a PHASE.PATH result is drawn). */
   showSelection(view: SelectionView): void;
+  /** Plots the states the workbook's selection holds on the phase diagram. */
+  showStatePoints(points: SelectedStatePoints): void;
+  /** The display units the pane shows now, as a units text. */
+  displayUnitsText(): string;
 }
 
 function substanceById(id: string): SubstanceDefinition {
@@ -113,6 +118,12 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
     },
     showSelection(view) {
       path.showSelection(view);
+    },
+    showStatePoints(points) {
+      diagram.setWorkbookPoints(points);
+    },
+    displayUnitsText() {
+      return units.system.text;
     },
   };
 }

@@ -5,7 +5,7 @@
  */
 import { mountPane } from "./app";
 import { officeColorScheme, officeHost } from "./office";
-import { followSelection } from "./office-selection";
+import { followSelection, followStatePoints } from "./office-selection";
 
 function start(): void {
   const root = document.getElementById("app");
@@ -15,7 +15,10 @@ function start(): void {
     pane.setHost(host);
     const scheme = officeColorScheme();
     if (scheme) document.documentElement.dataset["scheme"] = scheme;
-    if (host === "Excel") followSelection((view) => pane.showSelection(view));
+    if (host === "Excel") {
+      followSelection((view) => pane.showSelection(view));
+      followStatePoints(() => pane.displayUnitsText(), (points) => pane.showStatePoints(points));
+    }
   });
 }
 

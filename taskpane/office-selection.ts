@@ -15,6 +15,7 @@ import {
   unitsText,
   type SelectionView,
 } from "./data/path-table";
+import { MAX_SELECTION_CELLS, statePointsFromSelection, type StatePointsReading } from "./data/state-points";
 
 /** The part of the Excel namespace used here: the global inside Excel, a mock in tests. */
 export interface ExcelRunner {
@@ -138,5 +139,52 @@ export function followSelection(show: (view: SelectionView) => void): void {
   watchSelection(Excel, () => void refresh()).then(
     () => refresh(),
     (error: unknown) => show({ kind: "error", message: describeFailure(error) }),
+  );
+}
+
+/** State points read from the selection, with its address. */
+export interface SelectedStatePoints extends StatePointsReading {
+  readonly address: string;
+}
+
+/**
+ * Reads the selection as state points for the phase diagram: PHASE.STATE / MARGIN / ENTHALPY
+ * formulas, or a range of temperature and pressure in the pane's display units
+ * (data/state-points.ts). A selection larger than the cap is not read at all.
+ */
+export async function readSelectedStatePoints(excel: ExcelRunner, displayUnits: string): Promise<SelectedStatePoints> {
+  return excel.run(async (context) => {
+    const selected = context.workbook.getSelectedRange();
+    selected.load("address, rowCount, columnCount");
+    await context.sync();
+    const { address, rowCount, columnCount } = selected;
+    if (rowCount * columnCount > MAX_SELECTION_CELLS) {
+      return { address, ...statePointsFromSelection([[]], [[]], displayUnits), notes: [`the selection has ${rowCount * columnCount} cells; select at most ${MAX_SELECTION_CELLS}`] };
+    }
+    selected.load("values, formulas");
+    await context.sync();
+    return { address, ...statePointsFromSelection(selected.values as unknown[][], selected.formulas as unknown[][], displayUnits) };
+  });
+}
+
+/**
+ * Shows the state points of the selection now and after every change, in the display units the
+ * pane has at that moment. Does nothing outside Excel or without selection events.
+ */
+export function followStatePoints(displayUnits: () => string, show: (points: SelectedStatePoints) => void): void {
+  if (typeof Excel === "undefined" || !supports("ExcelApi", "1.2")) return;
+  let latest = 0;
+  const refresh = async (): Promise<void> => {
+    const ticket = ++latest;
+    try {
+      const points = await readSelectedStatePoints(Excel, displayUnits());
+      if (ticket === latest) show(points);
+    } catch (error) {
+      if (ticket === latest) show({ address: "", points: [], notes: [describeFailure(error)] });
+    }
+  };
+  watchSelection(Excel, () => void refresh()).then(
+    () => refresh(),
+    () => undefined,
   );
 }

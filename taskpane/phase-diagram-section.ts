@@ -18,12 +18,22 @@ import {
 } from "./data/phase-diagram";
 import { el } from "./render/dom";
 import { inWindow, renderDiagramLegend, renderDiagramSvg } from "./render/phase-diagram";
+import type { SelectedStatePoints } from "./office-selection";
+import { resolveSubstance } from "./data/substance-search";
+
+/** True when a name typed in a formula means the pane's substance. */
+function sameSubstance(name: string, substance: SubstanceDefinition): boolean {
+  const found = resolveSubstance(name);
+  return "id" in found && found.id === substance.id;
+}
 
 /** Handle on the mounted section. */
 export interface PhaseDiagramSection {
   readonly element: HTMLElement;
   /** The pane's substance or display units changed: draw again (points are kept only for the same substance). */
   setContext(substance: SubstanceDefinition, units: DisplayUnits): void;
+  /** The workbook's selection holds these states (they replace the previous selection's). */
+  setWorkbookPoints(points: SelectedStatePoints): void;
 }
 
 const ERROR_ID = "pd-point-error";
@@ -33,6 +43,8 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
   let current = { substance, units };
   let zoom: ZoomId = "full";
   let points: StatePointSI[] = [];
+  let workbook: SelectedStatePoints = { address: "", points: [], notes: [] };
+  const workbookNote = el(doc, "p", { class: "hint pd-workbook", role: "status" });
   let data: PhaseDiagramData = phaseDiagramData(substance, units.system);
 
   const zoomSlot = el(doc, "div", { class: "pd-zoom-slot" });
@@ -89,7 +101,18 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
   };
 
   const renderFigure = (): void => {
-    const drawn = statePoints(current.substance, current.units.system, points);
+    const fromWorkbook = workbook.points.filter((p) => p.substance === undefined || sameSubstance(p.substance, current.substance));
+    const drawn = statePoints(current.substance, current.units.system, [...points, ...fromWorkbook]);
+    const otherSubstance = workbook.points.length - fromWorkbook.length;
+    workbookNote.textContent =
+      workbook.address === "" || (workbook.points.length === 0 && workbook.notes.length === 0)
+        ? ""
+        : [
+            `From the selection ${workbook.address}: ${fromWorkbook.length} state point${fromWorkbook.length === 1 ? "" : "s"}` +
+              (otherSubstance > 0 ? ` (${otherSubstance} of another substance not shown)` : "") +
+              ".",
+            ...workbook.notes,
+          ].join(" ");
     figureSlot.replaceChildren(
       el(doc, "figure", { class: "pd-figure" }, [
         renderDiagramSvg(doc, data, drawn, { idPrefix: "phase-diagram", zoom }),
@@ -145,6 +168,10 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
     figureSlot,
     notesSlot,
     el(doc, "h3", {}, ["State points"]),
+    el(doc, "p", { class: "hint" }, [
+      "Type a state below, or select cells in the workbook: PHASE.STATE formulas, or two columns of temperature and pressure in the display units.",
+    ]),
+    workbookNote,
     form,
     errorSlot,
     status,
@@ -154,6 +181,10 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
 
   return {
     element,
+    setWorkbookPoints(selection: SelectedStatePoints) {
+      workbook = selection;
+      renderFigure();
+    },
     setContext(substance: SubstanceDefinition, units: DisplayUnits) {
       if (substance.id !== current.substance.id) {
         points = [];

@@ -8,7 +8,7 @@
 import { OfficeMockObject } from "office-addin-mock";
 import { beforeAll, describe, expect, it } from "vitest";
 import { chartFromTable } from "../../taskpane/data/path-table";
-import { readSelectedPath, watchSelection, type ExcelRunner } from "../../taskpane/office-selection";
+import { readSelectedPath, readSelectedStatePoints, watchSelection, type ExcelRunner } from "../../taskpane/office-selection";
 import { installCustomFunctionsStub } from "../functions/excel-stub";
 
 installCustomFunctionsStub();
@@ -243,5 +243,45 @@ describe("reading the selection with office-addin-mock", () => {
     await handlers[0]!();
     await handlers[0]!();
     expect(changes).toBe(2);
+  });
+});
+
+describe("state points from the selection, with office-addin-mock", () => {
+  it("reads PHASE.STATE formulas of the selected cells into points in SI", async () => {
+    const formulas = [['=PHASE.STATE("water",-38,0.3,"C mbar",TRUE)'], ['=PHASE.STATE("water",25,1.01325,"C bar")']];
+    const values = f.state([["water"]], [[-38], [25]], [[0.0003], [1.01325]], "C bar", true) as Values;
+    const excel = mockExcel({ range: rangeSeed("Sheet1!C2:C3", values, formulas), getSelectedRange() { return (this as any).range; } });
+    const reading = await readSelectedStatePoints(excel, "K Pa");
+    expect(reading.address).toBe("Sheet1!C2:C3");
+    // 0 °C = 273.15 K (ITS-90); 1 mbar = 100 Pa, 1 bar = 1e5 Pa (exact).
+    const expected = [
+      [235.15, 30],
+      [298.15, 101325],
+    ];
+    expect(reading.points).toHaveLength(2);
+    reading.points.forEach((point, i) => {
+      expect(point.temperatureK).toBeCloseTo(expected[i]![0]!, 10);
+      expect(point.pressurePa).toBeCloseTo(expected[i]![1]!, 6);
+    });
+    expect(reading.notes).toEqual([]);
+  });
+
+  it("reads a two-column range in the pane's display units", async () => {
+    const values = [["T", "p"], [120, 2], [-10, 1]];
+    const excel = mockExcel({ range: rangeSeed("Sheet1!A1:B3", values), getSelectedRange() { return (this as any).range; } });
+    const reading = await readSelectedStatePoints(excel, "C bar");
+    expect(reading.points.map((p) => p.label)).toEqual(["row 2", "row 3"]);
+    expect(reading.points[0]!.temperatureK).toBeCloseTo(393.15, 12);
+    expect(reading.points[0]!.pressurePa).toBe(2e5);
+  });
+
+  it("does not load the values of a huge selection", async () => {
+    const seed = rangeSeed("Sheet1!A1:Z1000", [[1]]);
+    seed.rowCount = 1000;
+    seed.columnCount = 26;
+    const excel = mockExcel({ range: seed, getSelectedRange() { return (this as any).range; } });
+    const reading = await readSelectedStatePoints(excel, "K Pa");
+    expect(reading.points).toEqual([]);
+    expect(reading.notes[0]).toMatch(/26000 cells/);
   });
 });
