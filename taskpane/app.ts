@@ -8,7 +8,7 @@
 import { SUBSTANCES } from "../core/substances/registry";
 import type { SubstanceDefinition } from "../core/substances/types";
 import { DISPLAY_UNITS, displayUnitsById, type DisplayUnits } from "./data/display-units";
-import type { SelectionView } from "./data/path-table";
+import { isobarOverlay, type SelectionView } from "./data/path-table";
 import { referenceData } from "./data/rows";
 import { createPathSection } from "./path-section";
 import type { SelectedStatePoints } from "./office-selection";
@@ -118,6 +118,7 @@ export function mountPane(root: HTMLElement, doc: Document = root.ownerDocument)
     },
     showSelection(view) {
       path.showSelection(view);
+      diagram.setWorkbookPath(isobarOverlay(view));
     },
     showStatePoints(points) {
       diagram.setWorkbookPoints(points);

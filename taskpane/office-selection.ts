@@ -8,6 +8,7 @@
  * permission (manifest.xml).
  */
 import {
+  isobarFromFormula,
   MAX_TABLE_ROWS,
   PATH_HEADER,
   selectionView,
@@ -87,7 +88,9 @@ export async function readSelectedPath(excel: ExcelRunner, options: SelectionOpt
       }
       referenced = (unitsCell.values as unknown[][])[0]?.[0];
     }
-    return selectionView(address, values, unitsText(source, referenced));
+    const view = selectionView(address, values, unitsText(source, referenced));
+    const pressurePa = isobarFromFormula(formula);
+    return view.kind === "path" && pressurePa !== undefined ? { ...view, pressurePa } : view;
   });
 }
 

@@ -5,7 +5,7 @@
  * Knows nothing of Office.
  */
 import type { SubstanceDefinition } from "../core/substances/types";
-import { unitSymbol } from "../core/units/units";
+import { fromSI, unitSymbol } from "../core/units/units";
 import type { DisplayUnits } from "./data/display-units";
 import {
   phaseDiagramData,
@@ -17,7 +17,8 @@ import {
   type ZoomId,
 } from "./data/phase-diagram";
 import { el } from "./render/dom";
-import { inWindow, renderDiagramLegend, renderDiagramSvg } from "./render/phase-diagram";
+import { inWindow, renderDiagramLegend, renderDiagramSvg, type PhaseDiagramOptions } from "./render/phase-diagram";
+import type { IsobarOverlay } from "./data/path-table";
 import type { SelectedStatePoints } from "./office-selection";
 import { resolveSubstance } from "./data/substance-search";
 
@@ -34,6 +35,8 @@ export interface PhaseDiagramSection {
   setContext(substance: SubstanceDefinition, units: DisplayUnits): void;
   /** The workbook's selection holds these states (they replace the previous selection's). */
   setWorkbookPoints(points: SelectedStatePoints): void;
+  /** The workbook's selection is a PHASE.PATH result: draw its isobar and phase changes (undefined clears). */
+  setWorkbookPath(path: IsobarOverlay | undefined): void;
 }
 
 const ERROR_ID = "pd-point-error";
@@ -44,6 +47,7 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
   let zoom: ZoomId = "full";
   let points: StatePointSI[] = [];
   let workbook: SelectedStatePoints = { address: "", points: [], notes: [] };
+  let workbookPath: IsobarOverlay | undefined;
   const workbookNote = el(doc, "p", { class: "hint pd-workbook", role: "status" });
   let data: PhaseDiagramData = phaseDiagramData(substance, units.system);
 
@@ -100,6 +104,22 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
     );
   };
 
+  const overlayOptions = (): { path?: NonNullable<PhaseDiagramOptions["path"]> } => {
+    if (!workbookPath) return {};
+    const { system } = current.units;
+    const show = (temperatureK: number) => ({
+      t: fromSI(system, "temperature", temperatureK),
+      p: fromSI(system, "pressure", workbookPath!.pressurePa),
+    });
+    return {
+      path: {
+        from: show(workbookPath.fromK),
+        to: show(workbookPath.toK),
+        crossings: workbookPath.crossingsK.map(show),
+      },
+    };
+  };
+
   const renderFigure = (): void => {
     const fromWorkbook = workbook.points.filter((p) => p.substance === undefined || sameSubstance(p.substance, current.substance));
     const drawn = statePoints(current.substance, current.units.system, [...points, ...fromWorkbook]);
@@ -115,7 +135,7 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
           ].join(" ");
     figureSlot.replaceChildren(
       el(doc, "figure", { class: "pd-figure" }, [
-        renderDiagramSvg(doc, data, drawn, { idPrefix: "phase-diagram", zoom }),
+        renderDiagramSvg(doc, data, drawn, { idPrefix: "phase-diagram", zoom, ...overlayOptions() }),
         renderDiagramLegend(doc, data),
       ]),
     );
@@ -181,6 +201,10 @@ export function createPhaseDiagramSection(doc: Document, substance: SubstanceDef
 
   return {
     element,
+    setWorkbookPath(path: IsobarOverlay | undefined) {
+      workbookPath = path;
+      renderFigure();
+    },
     setWorkbookPoints(selection: SelectedStatePoints) {
       workbook = selection;
       renderFigure();

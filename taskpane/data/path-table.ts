@@ -4,7 +4,7 @@
  * so they come from the units argument of the formula that spilled it, when that can be read.
  * No DOM and no Office, so it runs in Node tests.
  */
-import { parseUnits, unitSymbol } from "../../core/units/units";
+import { parseUnits, toSI, unitSymbol } from "../../core/units/units";
 import { NO_CHANGE_NOTE, styleOfPhase, type PathChartData, type PathSegment } from "./path-chart";
 
 /** The header row PHASE.PATH writes (functions/index.ts). */
@@ -202,7 +202,14 @@ export type SelectionView =
   /** It starts like a PATH result but cannot be drawn. */
   | { readonly kind: "invalid"; readonly address: string; readonly reason: string }
   /** A PATH result, ready to draw; `units` is its units text, null when unknown. */
-  | { readonly kind: "path"; readonly address: string; readonly units: string | null; readonly data: PathChartData }
+  | {
+      readonly kind: "path";
+      readonly address: string;
+      readonly units: string | null;
+      readonly data: PathChartData;
+      /** The isobar's pressure, Pa, when the formula writes it as a number. */
+      readonly pressurePa?: number;
+    }
   /** Reading the selection failed. */
   | { readonly kind: "error"; readonly message: string };
 
@@ -213,4 +220,55 @@ export function selectionView(address: string, values: readonly (readonly unknow
   return reading.ok
     ? { kind: "path", address, units, data: reading.data }
     : { kind: "invalid", address, reason: reading.reason };
+}
+
+/**
+ * The pressure of a PHASE.PATH formula's isobar, Pa, when the formula writes it (and its units)
+ * literally; undefined otherwise (a cell reference, an expression, an unknown unit).
+ */
+export function isobarFromFormula(formula: unknown): number | undefined {
+  if (typeof formula !== "string") return undefined;
+  const call = /^=\s*(?:_xldudf_)?[A-Za-z][\w]*[._]PATH\s*\(/i.exec(formula.trim());
+  if (!call) return undefined;
+  const args = splitArguments(formula.trim().slice(call[0].length));
+  const pressure = args?.[4];
+  if (!args || pressure === undefined || !/^[-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?$/.test(pressure)) return undefined;
+  const source = unitsFromFormula(formula);
+  const text = source.kind === "text" ? source.text : source.kind === "default" ? "" : undefined;
+  if (text === undefined) return undefined;
+  try {
+    return toSI(parseUnits(text), "pressure", Number(pressure));
+  } catch {
+    return undefined;
+  }
+}
+
+/** A selected PATH drawn on the phase diagram: its isobar from T1 to T2 and its phase changes, in SI. */
+export interface IsobarOverlay {
+  readonly pressurePa: number;
+  readonly fromK: number;
+  readonly toK: number;
+  /** Temperatures of the path's phase changes (its latent steps). */
+  readonly crossingsK: readonly number[];
+}
+
+/** The overlay of a selected PATH result, when its pressure and units are known. */
+export function isobarOverlay(view: SelectionView): IsobarOverlay | undefined {
+  if (view.kind !== "path" || view.pressurePa === undefined || view.units === null) return undefined;
+  let units;
+  try {
+    units = parseUnits(view.units);
+  } catch {
+    return undefined;
+  }
+  const segments = view.data.segments;
+  const first = segments[0];
+  const last = segments[segments.length - 1];
+  if (!first || !last) return undefined;
+  return {
+    pressurePa: view.pressurePa,
+    fromK: toSI(units, "temperature", first.fromT),
+    toK: toSI(units, "temperature", last.toT),
+    crossingsK: segments.filter((segment) => segment.kind === "latent").map((segment) => toSI(units, "temperature", segment.fromT)),
+  };
 }

@@ -9,10 +9,10 @@
 import { axisBottom, axisLeft } from "d3-axis";
 import { scaleLinear, scaleLog } from "d3-scale";
 import { select } from "d3-selection";
-import { line, symbol, symbolCircle, symbolDiamond, symbolSquare, type SymbolType } from "d3-shape";
+import { line, symbol, symbolCircle, symbolCross, symbolDiamond, symbolSquare, type SymbolType } from "d3-shape";
 import type { Boundary } from "../../core/substances/types";
 import { formatNumber } from "../../core/errors";
-import type { DiagramCurve, PhaseDiagramData, StatePoint, ZoomId } from "../data/phase-diagram";
+import type { DiagramCurve, DiagramPoint, PhaseDiagramData, StatePoint, ZoomId } from "../data/phase-diagram";
 import { el } from "./dom";
 
 const SVG_NS = "http://www.w3.org/2000/svg";
@@ -77,6 +77,8 @@ export function diagramDescription(data: PhaseDiagramData, points: readonly Stat
 export interface PhaseDiagramOptions {
   readonly idPrefix: string;
   readonly zoom: ZoomId;
+  /** A selected PATH result: its isobar and phase changes, in display units. */
+  readonly path?: { readonly from: DiagramPoint; readonly to: DiagramPoint; readonly crossings: readonly DiagramPoint[] };
 }
 
 function curveClass(boundary: Boundary): string {
@@ -241,6 +243,26 @@ export function renderDiagramSvg(doc: Document, data: PhaseDiagramData, points: 
     .attr("y", DIAGRAM_HEIGHT - 6)
     .attr("text-anchor", "middle")
     .text(`Temperature, ${data.temperatureUnit}`);
+
+  if (options.path) {
+    const overlay = svg.append("g").attr("class", "pd-path-overlay").attr("clip-path", `url(#${clipId})`);
+    overlay
+      .append("path")
+      .attr("class", "pd-path-line")
+      .attr("d", line()([at(options.path.from.t, options.path.from.p), at(options.path.to.t, options.path.to.p)]))
+      .append("title")
+      .text("Selected PHASE.PATH: its isobar");
+    for (const crossing of options.path.crossings) {
+      const [cx, cy] = at(crossing.t, crossing.p);
+      overlay
+        .append("path")
+        .attr("class", "pd-path-crossing")
+        .attr("transform", `translate(${cx},${cy})`)
+        .attr("d", symbol(symbolCross, STATE_AREA)())
+        .append("title")
+        .text("phase change on the selected path");
+    }
+  }
 
   const labels = svg.append("g").attr("class", "pd-labels").attr("aria-hidden", "true");
   /** Boxes already taken by labels and markers: [x0, y0, x1, y1]. */

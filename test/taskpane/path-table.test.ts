@@ -143,3 +143,27 @@ describe("what the pane says about a selection", () => {
     });
   });
 });
+
+describe("a selected PATH on the phase diagram", () => {
+  it("reads the isobar's pressure from the formula and the phase changes from the table", async () => {
+    const { isobarFromFormula, isobarOverlay, selectionView } = await import("../../taskpane/data/path-table");
+    // 1.01325 bar = 101325 Pa exactly (1 bar = 1e5 Pa); 0 °C = 273.15 K (ITS-90).
+    expect(isobarFromFormula('=PHASE.PATH("water",1,-20,120,1.01325,"C bar kJ kg")')).toBeCloseTo(101325, 9);
+    expect(isobarFromFormula('=PHASE.PATH("water",1,-20,120,B4,"C bar kJ kg")')).toBeUndefined();
+    expect(isobarFromFormula('=PHASE.PATH("water",1,250,300,611.657)')).toBe(611.657);
+    const table = [
+      ["step", "what happens", "from", "to", "energy", "running total"],
+      [1, "heat ice Ih", -20, 0.0025, 40.5, 40.5],
+      [2, "melt", 0.0025, 0.0025, 333.4, 373.9],
+      [3, "heat liquid", 0.0025, 20, 83.7, 457.6],
+    ];
+    const view = { ...selectionView("Sheet1!A1:F4", table, "C bar kJ kg"), pressurePa: 101325 };
+    const overlay = isobarOverlay(view)!;
+    expect(overlay.pressurePa).toBe(101325);
+    expect(overlay.fromK).toBeCloseTo(253.15, 10);
+    expect(overlay.toK).toBeCloseTo(293.15, 10);
+    expect(overlay.crossingsK).toHaveLength(1);
+    expect(overlay.crossingsK[0]).toBeCloseTo(273.1525, 10);
+    expect(isobarOverlay(selectionView("Sheet1!A1:F4", table, null))).toBeUndefined();
+  });
+});
