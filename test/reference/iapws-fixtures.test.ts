@@ -32,7 +32,7 @@ interface Grid {
 }
 
 interface Fixtures {
-  readonly library: { readonly module_version: string };
+  readonly reference_implementation: { readonly module_version: string };
   readonly units: { readonly pressure: string; readonly temperature: string };
   readonly grids: Readonly<Record<string, Grid>>;
 }
@@ -66,7 +66,7 @@ function expectGridClose(rows: readonly (readonly [number, number])[], compute: 
 
 describe("iapws fixtures file", () => {
   it("was made with iapws module 1.5.2 (Debian python3-iapws 1.5.3-1), in SI units", () => {
-    expect(fixtures.library.module_version).toBe("1.5.2");
+    expect(fixtures.reference_implementation.module_version).toBe("1.5.2");
     expect(fixtures.units).toEqual({ pressure: "Pa", temperature: "K" });
   });
 

@@ -136,7 +136,7 @@ def build():
     return {
         "generator": "test/reference/make_iapws_fixtures.py",
         "regenerate": "npm run fixtures (check: /usr/bin/python3 test/reference/make_iapws_fixtures.py --check)",
-        "library": {
+        "reference_implementation": {
             "name": "iapws (python3-iapws)",
             "module_version": iapws.__version__,
         },
@@ -177,10 +177,10 @@ def describe_difference(committed_text, fresh):
     except ValueError as error:
         return ["committed file is not valid JSON: %s" % error]
     lines = []
-    old_version = committed.get("library", {}).get("module_version")
-    if old_version != fresh["library"]["module_version"]:
+    old_version = committed.get("reference_implementation", {}).get("module_version")
+    if old_version != fresh["reference_implementation"]["module_version"]:
         lines.append(
-            "iapws module version: committed %s, installed %s" % (old_version, fresh["library"]["module_version"])
+            "iapws module version: committed %s, installed %s" % (old_version, fresh["reference_implementation"]["module_version"])
         )
     old_grids = committed.get("grids", {})
     for name in sorted(set(old_grids) | set(fresh["grids"])):
@@ -221,7 +221,7 @@ def main():
             sys.stderr.write("fixtures check failed: cannot read %s (%s)\n" % (OUTPUT, error))
             return 1
         if committed_text == text:
-            print("iapws-fixtures.json is up to date (iapws %s)" % fresh["library"]["module_version"])
+            print("iapws-fixtures.json is up to date (iapws %s)" % fresh["reference_implementation"]["module_version"])
             return 0
         sys.stderr.write(
             "fixtures check failed: test/reference/iapws-fixtures.json differs from a fresh run.\n"
@@ -233,7 +233,7 @@ def main():
     with open(OUTPUT, "w", encoding="utf-8", newline="\n") as handle:
         handle.write(text)
     counts = ", ".join("%s %d" % (name, g["count"]) for name, g in sorted(fresh["grids"].items()))
-    print("wrote test/reference/iapws-fixtures.json (iapws %s): %s" % (fresh["library"]["module_version"], counts))
+    print("wrote test/reference/iapws-fixtures.json (iapws %s): %s" % (fresh["reference_implementation"]["module_version"], counts))
     return 0
 
 
