@@ -20,7 +20,7 @@ import {
   IF97_T_REGION_3_MAX,
   IF97_T_REGION_5_MIN,
 } from "../models/iapws-if97/regions";
-import { iceIh } from "../models/iapws-r10/ice-ih";
+import { iceIhEnthalpy } from "../models/iapws-r10/ice-ih";
 import { ICE_IH } from "../models/iapws-r14/melting-pressure";
 import type { EnthalpyModel, ModelInfo, PhaseSide } from "./types";
 
@@ -100,7 +100,7 @@ function iceEnthalpy(temperatureK: number, pressurePa: number, solid: string): n
       ")",
     ]);
   }
-  return iceIh(temperatureK, pressurePa).enthalpy;
+  return iceIhEnthalpy(temperatureK, pressurePa);
 }
 
 function outOfIF97(temperatureK: number, pressurePa: number, why: string): OutOfRangeError {

@@ -166,3 +166,36 @@ export function iceIh(temperatureK: number, pressurePa: number): IceProperties {
     gtt,
   };
 }
+
+/**
+ * Specific enthalpy alone, J/kg, of ice Ih at T (K) and p (Pa), for the path-energy hot path.
+ *
+ * h = g − T·g_T with the Gibbs function above. The s0 terms cancel, and for each k
+ * B − tau·B_tau = t_k·(ln(t_k − tau) + ln(t_k + tau)) − 2·t_k·ln(t_k) + tau²/t_k (principal
+ * logarithms, as in the release), so h = g0(p) + T_t·Re(r1·H1 + r2(p)·H2) with H_k that bracket.
+ * The same arithmetic as {@link iceIh} on real and imaginary parts, without building the other
+ * properties.
+ */
+export function iceIhEnthalpy(temperatureK: number, pressurePa: number): number {
+  const tau = temperatureK / Tt;
+  const dPi = pressurePa / pt - pi0;
+  const g0Value = g0[0]! + dPi * (g0[1]! + dPi * (g0[2]! + dPi * (g0[3]! + dPi * g0[4]!)));
+  const r2Re = r2[0]!.re + dPi * (r2[1]!.re + dPi * r2[2]!.re);
+  const r2Im = r2[0]!.im + dPi * (r2[1]!.im + dPi * r2[2]!.im);
+  const h1 = enthalpyBracket(t1, twoTLogT1, inverseT1, tau);
+  const h2 = enthalpyBracket(t2, twoTLogT2, inverseT2, tau);
+  const real = r1.re * h1.re - r1.im * h1.im + (r2Re * h2.re - r2Im * h2.im);
+  return g0Value + Tt * real;
+}
+
+/** t·(ln(t − tau) + ln(t + tau)) − 2·t·ln(t) + tau²/t for one complex t. */
+function enthalpyBracket(t: Complex, twoTLogT: Complex, inverseT: Complex, tau: number): Complex {
+  const aRe = t.re - tau;
+  const bRe = t.re + tau;
+  const sumLogRe = 0.5 * Math.log((aRe * aRe + t.im * t.im) * (bRe * bRe + t.im * t.im));
+  const sumLogIm = Math.atan2(t.im, aRe) + Math.atan2(t.im, bRe);
+  return {
+    re: t.re * sumLogRe - t.im * sumLogIm - twoTLogT.re + tau * tau * inverseT.re,
+    im: t.re * sumLogIm + t.im * sumLogRe - twoTLogT.im + tau * tau * inverseT.im,
+  };
+}
