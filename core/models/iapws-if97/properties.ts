@@ -55,3 +55,37 @@ export function integerPower(x: number, n: number): number {
   }
   return n < 0 ? 1 / result : result;
 }
+
+/**
+ * Properties from a dimensionless Gibbs function split into an ideal-gas part with
+ * gamma0_pi = 1/pi and a residual part, as in IF97 regions 2 and 5 (the release gives region 5
+ * the property relations of region 2, Table 12). Arguments are the sums the region evaluates:
+ * gamma, tau·gamma_tau, tau²·gamma_tautau (ideal plus residual), and pi·gammaR_pi,
+ * pi²·gammaR_pipi, tau·pi·gammaR_pitau (residual only).
+ */
+export function gammaSplitProperties(
+  temperatureK: number,
+  pressurePa: number,
+  gamma: number,
+  tauGammaTau: number,
+  tau2GammaTauTau: number,
+  piGammaRPi: number,
+  pi2GammaRPiPi: number,
+  tauPiGammaRPiTau: number,
+): FluidProperties {
+  const RT = IF97_GAS_CONSTANT * temperatureK;
+  // v = (RT/p)·pi·(gamma0_pi + gammaR_pi), with pi·gamma0_pi = 1.
+  const specificVolume = (RT * (1 + piGammaRPi)) / pressurePa;
+  const x = 1 + piGammaRPi - tauPiGammaRPiTau;
+  return {
+    specificVolume,
+    density: 1 / specificVolume,
+    enthalpy: RT * tauGammaTau,
+    internalEnergy: RT * (tauGammaTau - (1 + piGammaRPi)),
+    entropy: IF97_GAS_CONSTANT * (tauGammaTau - gamma),
+    isobaricHeatCapacity: -IF97_GAS_CONSTANT * tau2GammaTauTau,
+    speedOfSound: Math.sqrt(
+      (RT * (1 + 2 * piGammaRPi + piGammaRPi * piGammaRPi)) / (1 - pi2GammaRPiPi + (x * x) / tau2GammaTauTau),
+    ),
+  };
+}

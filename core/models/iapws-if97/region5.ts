@@ -16,7 +16,7 @@
  *   property relations are those of region 2.
  * Deviations from the text: none. SI in and out; sums accumulated as in region2.ts.
  */
-import { IF97_GAS_CONSTANT as R, integerPower, type FluidProperties } from "./properties";
+import { gammaSplitProperties, integerPower, type FluidProperties } from "./properties";
 
 /** IF97 Table 37, exponents J°_i, i = 1…6 (index 0 unused). */
 const J0: readonly number[] = [
@@ -100,27 +100,14 @@ export function region5(temperatureK: number, pressurePa: number): FluidProperti
     tauPiGammaRPiTau += Ii * Ji * term;
   }
 
-  const RT = R * temperatureK;
-  const tauGammaTau = tauGamma0Tau + tauGammaRTau;
-  const tau2GammaTauTau = tau2Gamma0TauTau + tau2GammaRTauTau;
-  // v = (RT/p)·pi·(gamma0_pi + gammaR_pi), with pi·gamma0_pi = 1.
-  const specificVolume = (RT * (1 + piGammaRPi)) / pressurePa;
-  const enthalpy = RT * tauGammaTau;
-  const internalEnergy = RT * (tauGammaTau - (1 + piGammaRPi));
-  const entropy = R * (tauGammaTau - (gamma0 + gammaR));
-  const isobaricHeatCapacity = -R * tau2GammaTauTau;
-  const x = 1 + piGammaRPi - tauPiGammaRPiTau;
-  const speedOfSound = Math.sqrt(
-    (RT * (1 + 2 * piGammaRPi + piGammaRPi * piGammaRPi)) /
-      (1 - pi2GammaRPiPi + (x * x) / tau2GammaTauTau),
+  return gammaSplitProperties(
+    temperatureK,
+    pressurePa,
+    gamma0 + gammaR,
+    tauGamma0Tau + tauGammaRTau,
+    tau2Gamma0TauTau + tau2GammaRTauTau,
+    piGammaRPi,
+    pi2GammaRPiPi,
+    tauPiGammaRPiTau,
   );
-  return {
-    specificVolume,
-    density: 1 / specificVolume,
-    enthalpy,
-    internalEnergy,
-    entropy,
-    isobaricHeatCapacity,
-    speedOfSound,
-  };
 }
