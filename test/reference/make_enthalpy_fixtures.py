@@ -51,7 +51,6 @@ Fluid states within 0.5 % of p_s(T) are left out of the single-state grid (on th
 the phase is decided by rounding).
 """
 
-import argparse
 import json
 import os
 import sys
@@ -81,7 +80,7 @@ except ImportError as error:  # pragma: no cover - depends on the machine
     sys.exit(2)
 
 sys.path.insert(0, os.path.dirname(os.path.abspath(__file__)))
-from make_iapws_fixtures import linear_grid, log_grid, render  # noqa: E402
+from make_iapws_fixtures import check_or_write, compare_tables, linear_grid, log_grid, render  # noqa: E402
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 OUTPUT = os.path.join(HERE, "enthalpy-fixtures.json")
@@ -424,61 +423,21 @@ def describe_difference(committed_text, fresh):
         new = fresh["libraries"][library]["module_version"]
         if old != new:
             lines.append("%s module version: committed %s, installed %s" % (library, old, new))
-    old_tables, new_tables = tables(committed), tables(fresh)
-    for name in sorted(set(old_tables) | set(new_tables)):
-        if name not in old_tables or name not in new_tables:
-            lines.append("table %s: present in only one of the two files" % name)
-            continue
-        old_rows, new_rows = old_tables[name], new_tables[name]
-        if len(old_rows) != len(new_rows):
-            lines.append("table %s: %d rows committed, %d now" % (name, len(old_rows), len(new_rows)))
-            continue
-        worst, changed = 0.0, 0
-        for old, new in zip(old_rows, new_rows):
-            if old != new:
-                changed += 1
-                for a, b in zip(old, new):
-                    if isinstance(a, float) and isinstance(b, float) and a != b:
-                        worst = max(worst, abs(a - b) / max(abs(a), abs(b)))
-        if changed:
-            lines.append("table %s: %d rows differ, worst relative difference %.3g" % (name, changed, worst))
+    lines += compare_tables(tables(committed), tables(fresh), "table")
     return lines or ["texts differ outside the tables (metadata, triple point or formatting)"]
 
 
 def main():
-    parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
-    parser.add_argument(
-        "--check",
-        action="store_true",
-        help="regenerate in memory and exit 1 if the committed file differs",
-    )
-    args = parser.parse_args()
     fresh = build()
-    text = render(fresh) + "\n"
     versions = "iapws %s, gsw %s" % (fresh["libraries"]["iapws"]["module_version"], fresh["libraries"]["gsw"]["module_version"])
-    if args.check:
-        try:
-            with open(OUTPUT, encoding="utf-8") as handle:
-                committed_text = handle.read()
-        except OSError as error:
-            sys.stderr.write("fixtures check failed: cannot read %s (%s)\n" % (OUTPUT, error))
-            return 1
-        if committed_text == text:
-            print("enthalpy-fixtures.json is up to date (%s)" % versions)
-            return 0
-        sys.stderr.write("fixtures check failed: test/reference/enthalpy-fixtures.json differs from a fresh run.\n")
-        for line in describe_difference(committed_text, fresh):
-            sys.stderr.write("  " + line + "\n")
-        sys.stderr.write(
-            "Regenerate with `/usr/bin/python3 test/reference/make_enthalpy_fixtures.py` and review the change "
-            "before committing.\n"
-        )
-        return 1
-    with open(OUTPUT, "w", encoding="utf-8", newline="\n") as handle:
-        handle.write(text)
     counts = ", ".join("%s %d" % (name, len(rows)) for name, rows in sorted(tables(fresh).items()))
-    print("wrote test/reference/enthalpy-fixtures.json (%s): %s" % (versions, counts))
-    return 0
+    return check_or_write(
+        OUTPUT,
+        render(fresh) + "\n",
+        lambda committed_text: describe_difference(committed_text, fresh),
+        versions,
+        counts,
+    )
 
 
 if __name__ == "__main__":

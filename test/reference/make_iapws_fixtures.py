@@ -170,6 +170,61 @@ def render(value, indent=0):
     return json.dumps(value, ensure_ascii=False)
 
 
+def compare_tables(old_tables, new_tables, kind):
+    """Lines saying which row tables (name -> rows) differ and by how much."""
+    lines = []
+    for name in sorted(set(old_tables) | set(new_tables)):
+        if name not in old_tables or name not in new_tables:
+            lines.append("%s %s: present in only one of the two files" % (kind, name))
+            continue
+        old_rows, new_rows = old_tables[name], new_tables[name]
+        if len(old_rows) != len(new_rows):
+            lines.append("%s %s: %d rows committed, %d now" % (kind, name, len(old_rows), len(new_rows)))
+            continue
+        worst, changed = 0.0, 0
+        for old, new in zip(old_rows, new_rows):
+            if old != new:
+                changed += 1
+                for a, b in zip(old, new):
+                    if isinstance(a, float) and isinstance(b, float) and a != b:
+                        worst = max(worst, abs(a - b) / max(abs(a), abs(b)))
+        if changed:
+            lines.append("%s %s: %d rows differ, worst relative difference %.3g" % (kind, name, changed, worst))
+    return lines
+
+
+def check_or_write(output, text, describe, versions, counts):
+    """Writes the fixture file, or with --check compares it with a fresh run; returns the exit code."""
+    script_doc = sys.modules["__main__"].__doc__ or ""
+    parser = argparse.ArgumentParser(description=script_doc.split("\n")[0])
+    parser.add_argument(
+        "--check",
+        action="store_true",
+        help="regenerate in memory and exit 1 if the committed file differs",
+    )
+    args = parser.parse_args()
+    name = os.path.basename(output)
+    if args.check:
+        try:
+            with open(output, encoding="utf-8") as handle:
+                committed_text = handle.read()
+        except OSError as error:
+            sys.stderr.write("fixtures check failed: cannot read %s (%s)\n" % (output, error))
+            return 1
+        if committed_text == text:
+            print("%s is up to date (%s)" % (name, versions))
+            return 0
+        sys.stderr.write("fixtures check failed: test/reference/%s differs from a fresh run.\n" % name)
+        for line in describe(committed_text):
+            sys.stderr.write("  " + line + "\n")
+        sys.stderr.write("Regenerate with `npm run fixtures` and review the change before committing.\n")
+        return 1
+    with open(output, "w", encoding="utf-8", newline="\n") as handle:
+        handle.write(text)
+    print("wrote test/reference/%s (%s): %s" % (name, versions, counts))
+    return 0
+
+
 def describe_difference(committed_text, fresh):
     """A short account of how the committed file differs from a fresh run."""
     try:
@@ -182,59 +237,22 @@ def describe_difference(committed_text, fresh):
         lines.append(
             "iapws module version: committed %s, installed %s" % (old_version, fresh["reference_implementation"]["module_version"])
         )
-    old_grids = committed.get("grids", {})
-    for name in sorted(set(old_grids) | set(fresh["grids"])):
-        if name not in old_grids or name not in fresh["grids"]:
-            lines.append("grid %s: present in only one of the two files" % name)
-            continue
-        old_rows, new_rows = old_grids[name]["rows"], fresh["grids"][name]["rows"]
-        if len(old_rows) != len(new_rows):
-            lines.append("grid %s: %d rows committed, %d now" % (name, len(old_rows), len(new_rows)))
-            continue
-        worst, changed = 0.0, 0
-        for old, new in zip(old_rows, new_rows):
-            if old != new:
-                changed += 1
-                for a, b in zip(old, new):
-                    if a != b:
-                        worst = max(worst, abs(a - b) / max(abs(a), abs(b)))
-        if changed:
-            lines.append("grid %s: %d rows differ, worst relative difference %.3g" % (name, changed, worst))
+    old_grids = {name: grid["rows"] for name, grid in committed.get("grids", {}).items()}
+    new_grids = {name: grid["rows"] for name, grid in fresh["grids"].items()}
+    lines += compare_tables(old_grids, new_grids, "grid")
     return lines or ["texts differ outside the grids (metadata or formatting)"]
 
 
 def main():
-    parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
-    parser.add_argument(
-        "--check",
-        action="store_true",
-        help="regenerate in memory and exit 1 if the committed file differs",
-    )
-    args = parser.parse_args()
     fresh = build()
-    text = render(fresh) + "\n"
-    if args.check:
-        try:
-            with open(OUTPUT, encoding="utf-8") as handle:
-                committed_text = handle.read()
-        except OSError as error:
-            sys.stderr.write("fixtures check failed: cannot read %s (%s)\n" % (OUTPUT, error))
-            return 1
-        if committed_text == text:
-            print("iapws-fixtures.json is up to date (iapws %s)" % fresh["reference_implementation"]["module_version"])
-            return 0
-        sys.stderr.write(
-            "fixtures check failed: test/reference/iapws-fixtures.json differs from a fresh run.\n"
-        )
-        for line in describe_difference(committed_text, fresh):
-            sys.stderr.write("  " + line + "\n")
-        sys.stderr.write("Regenerate with `npm run fixtures` and review the change before committing.\n")
-        return 1
-    with open(OUTPUT, "w", encoding="utf-8", newline="\n") as handle:
-        handle.write(text)
     counts = ", ".join("%s %d" % (name, g["count"]) for name, g in sorted(fresh["grids"].items()))
-    print("wrote test/reference/iapws-fixtures.json (iapws %s): %s" % (fresh["reference_implementation"]["module_version"], counts))
-    return 0
+    return check_or_write(
+        OUTPUT,
+        render(fresh) + "\n",
+        lambda committed_text: describe_difference(committed_text, fresh),
+        "iapws %s" % fresh["reference_implementation"]["module_version"],
+        counts,
+    )
 
 
 if __name__ == "__main__":
